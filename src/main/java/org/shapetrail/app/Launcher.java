@@ -1,0 +1,25 @@
+package org.shapetrail.app;
+
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import javafx.application.Application;
+import org.shapetrail.cli.ShapetrailCli;
+
+/**
+ * Entry point of the jar: with a command (e.g. {@code rate FILE.csv}) it runs the command line, otherwise
+ * it opens the desktop window. A plain class, not an {@code Application}, so that the jar starts on the
+ * class path without "JavaFX runtime components are missing".
+ */
+public final class Launcher {
+    private Launcher() {
+    }
+
+    public static void main(String[] args) {
+        if (ShapetrailCli.wantsCommandLine(args)) {
+            PrintWriter out = new PrintWriter(new java.io.OutputStreamWriter(System.out, StandardCharsets.UTF_8));
+            PrintWriter err = new PrintWriter(new java.io.OutputStreamWriter(System.err, StandardCharsets.UTF_8));
+            System.exit(ShapetrailCli.execute(args, out, err));
+        }
+        Application.launch(ShapetrailApp.class, args);
+    }
+}

@@ -1,0 +1,35 @@
+package org.shapetrail.cli;
+
+import java.io.PrintWriter;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The command line: {@code java -jar shapetrail.jar COMMAND ...}; see docs/cli.md. */
+@Command(name = "shapetrail", mixinStandardHelpOptions = true, version = "Shapetrail 0.1",
+        description = "Somatotype, growth and measurement-noise tools for practitioners.",
+        subcommands = {RateCommand.class, CommandLine.HelpCommand.class})
+public final class ShapetrailCli implements Runnable {
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** Runs the command line with the given streams and returns the exit code. */
+    public static int execute(String[] args, PrintWriter out, PrintWriter err) {
+        CommandLine cl = new CommandLine(new ShapetrailCli());
+        cl.setOut(out);
+        cl.setErr(err);
+        int code = cl.execute(args);
+        out.flush();
+        err.flush();
+        return code;
+    }
+
+    /** True when the arguments ask for the command line rather than the desktop window. */
+    public static boolean wantsCommandLine(String[] args) {
+        return args.length > 0 && !args[0].startsWith("--db");
+    }
+}
