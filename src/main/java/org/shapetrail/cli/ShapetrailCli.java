@@ -7,7 +7,8 @@ import picocli.CommandLine.Command;
 /** The command line: {@code java -jar shapetrail.jar COMMAND ...}; see docs/cli.md. */
 @Command(name = "shapetrail", mixinStandardHelpOptions = true, version = "Shapetrail 0.1",
         description = "Somatotype, growth and measurement-noise tools for practitioners.",
-        subcommands = {RateCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {RateCommand.class, PeopleCommand.class, BackupCommand.class, RestoreCommand.class,
+            ExportPersonCommand.class, ErasePersonCommand.class, CommandLine.HelpCommand.class})
 public final class ShapetrailCli implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -22,6 +23,14 @@ public final class ShapetrailCli implements Runnable {
         CommandLine cl = new CommandLine(new ShapetrailCli());
         cl.setOut(out);
         cl.setErr(err);
+        // a failure a person can act on is shown as its message, never as a stack trace
+        cl.setExecutionExceptionHandler((ex, line, parsed) -> {
+            if (ex instanceof org.shapetrail.ShapetrailException) {
+                line.getErr().println(ex.getMessage());
+                return 2;
+            }
+            throw ex;
+        });
         int code = cl.execute(args);
         out.flush();
         err.flush();

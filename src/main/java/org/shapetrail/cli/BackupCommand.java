@@ -1,0 +1,42 @@
+package org.shapetrail.cli;
+
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.shapetrail.store.ContentDigest;
+import org.shapetrail.store.Database;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code backup TARGET}: a consistent copy of the file, safe while the app has it open. */
+@Command(name = "backup", mixinStandardHelpOptions = true,
+        description = "Write a consistent copy of a Shapetrail file (safe while the app has it open).")
+final class BackupCommand implements Callable<Integer> {
+    @Mixin
+    DbOption db;
+
+    @Parameters(index = "0", paramLabel = "TARGET", description = "File to write the backup to (replaced if present).")
+    Path target;
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        try (Database d = db.open()) {
+            d.backupTo(target);
+            String digest = ContentDigest.of(d);
+            try (Database copy = Database.open(target)) {
+                if (!digest.equals(ContentDigest.of(copy))) {
+                    spec.commandLine().getErr().println("The backup " + target + " does not match the original;"
+                            + " do not rely on it. Try again.");
+                    return 1;
+                }
+            }
+            spec.commandLine().getOut().println("Backed up " + d.file() + " to " + target.toAbsolutePath()
+                    + " (content checked).");
+        }
+        return 0;
+    }
+}

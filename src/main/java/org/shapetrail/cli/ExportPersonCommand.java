@@ -1,0 +1,45 @@
+package org.shapetrail.cli;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.PersonExport;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code export-person ID}: one person's complete record as JSON (right of access). */
+@Command(name = "export-person", mixinStandardHelpOptions = true,
+        description = "Write one person's complete record (all visits and raw trials) as JSON.")
+final class ExportPersonCommand implements Callable<Integer> {
+    @Mixin
+    DbOption db;
+
+    @Parameters(index = "0", paramLabel = "ID", description = "The person's id (see the people command).")
+    long personId;
+
+    @Option(names = "--out", paramLabel = "FILE", description = "Write to FILE instead of standard output.")
+    Path out;
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws IOException {
+        try (Database d = db.open()) {
+            String json = d.inTransaction(tx -> PersonExport.toJson(tx, personId));
+            if (out == null) {
+                spec.commandLine().getOut().print(json);
+            } else {
+                Files.writeString(out, json, StandardCharsets.UTF_8);
+                spec.commandLine().getOut().println("Wrote the record of person " + personId + " to " + out + ".");
+            }
+        }
+        return 0;
+    }
+}

@@ -1,0 +1,280 @@
+package org.shapetrail.store;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.time.LocalDateTime;
+import java.time.format.DateTimeFormatter;
+import java.util.concurrent.locks.ReentrantLock;
+import org.sqlite.SQLiteConfig;
+import org.sqlite.SQLiteDataSource;
+import org.sqlite.SQLiteErrorCode;
+import org.sqlite.SQLiteException;
+
+/**
+ * One Shapetrail file: a SQLite database with foreign keys on, WAL journal and a busy timeout, migrated
+ * to the current schema when opened (after a backup copy of an existing file is written beside it).
+ * All access goes through {@link #inTransaction}: commit on return, roll back on throw.
+ *
+ * <p>One connection is shared and guarded by a lock, so calls from several threads are serialised; other
+ * processes may read and write the same file at the same time (SQLite's locking).
+ */
+public final class Database implements AutoCloseable {
+    /** Milliseconds a write waits for another process's lock before giving up with {@link FileBusyException}. */
+    public static final int BUSY_TIMEOUT_MS = 5000;
+
+    private final Path file;
+    private final Connection connection;
+    private final ReentrantLock lock = new ReentrantLock();
+    private final Path migrationBackup;
+
+    private Database(Path file, Connection connection, Path migrationBackup) {
+        this.file = file;
+        this.connection = connection;
+        this.migrationBackup = migrationBackup;
+    }
+
+    /** Work done inside one transaction. */
+    @FunctionalInterface
+    public interface TransactionWork<T> {
+        T run(Tx tx) throws SQLException;
+    }
+
+    /** Opens (creating if absent) and migrates the file. */
+    public static Database open(Path file) {
+        return open(file, BUSY_TIMEOUT_MS);
+    }
+
+    /** Opens with a chosen busy timeout (tests of contention use a short one). */
+    public static Database open(Path file, int busyTimeoutMs) {
+        Path abs = file.toAbsolutePath();
+        try {
+            if (abs.getParent() != null) {
+                Files.createDirectories(abs.getParent());
+            }
+        } catch (IOException e) {
+            throw new StoreException("Cannot create the folder for " + abs + ": " + e.getMessage(), e);
+        }
+        boolean existed = Files.exists(abs) && sizeOf(abs) > 0;
+        SQLiteConfig config = new SQLiteConfig();
+        config.enforceForeignKeys(true);
+        config.setJournalMode(SQLiteConfig.JournalMode.WAL);
+        config.setBusyTimeout(busyTimeoutMs);
+        config.setSynchronous(SQLiteConfig.SynchronousMode.NORMAL);
+        // take the write lock when a transaction begins, so a busy file fails before any work, not at commit
+        config.setTransactionMode(SQLiteConfig.TransactionMode.IMMEDIATE);
+        SQLiteDataSource ds = new SQLiteDataSource(config);
+        ds.setUrl("jdbc:sqlite:" + abs);
+        Connection c = null;
+        try {
+            c = ds.getConnection();
+            int version = Migrations.currentVersion(c);
+            if (version > Migrations.latest()) {
+                throw new StoreException("The file " + abs + " was written by a newer Shapetrail (schema " + version
+                        + "); this version reads up to schema " + Migrations.latest() + ". Update Shapetrail.");
+            }
+            Path backup = null;
+            if (version < Migrations.latest()) {
+                if (existed) {
+                    backup = abs.resolveSibling(abs.getFileName() + ".before-schema-" + Migrations.latest() + "-"
+                            + LocalDateTime.now().format(DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss")) + ".bak");
+                    try (Statement s = c.createStatement()) {
+                        s.executeUpdate("VACUUM INTO '" + backup.toString().replace("'", "''") + "'");
+                    }
+                }
+                Migrations.migrate(c, version, Migrations.latest());
+            }
+            return new Database(abs, c, backup);
+        } catch (SQLException e) {
+            closeQuietly(c);
+            throw translate(abs.toString(), e);
+        } catch (RuntimeException e) {
+            closeQuietly(c);
+            throw e;
+        }
+    }
+
+    private static long sizeOf(Path p) {
+        try {
+            return Files.size(p);
+        } catch (IOException e) {
+            return 0;
+        }
+    }
+
+    private static void closeQuietly(Connection c) {
+        if (c != null) {
+            try {
+                c.close();
+            } catch (SQLException ignored) {
+                // nothing more to do: the open already failed
+            }
+        }
+    }
+
+    /** The file this database reads and writes. */
+    public Path file() {
+        return file;
+    }
+
+    /** The copy written before migrating this file when it was opened, or null if none was needed. */
+    public Path migrationBackup() {
+        return migrationBackup;
+    }
+
+    /** The schema version of the open file. */
+    public int schemaVersion() {
+        return inTransaction(tx -> Migrations.currentVersion(tx.connection()));
+    }
+
+    /**
+     * Runs {@code work} in one transaction: commits when it returns, rolls back when it throws (the
+     * exception is passed on; an {@link SQLException} is wrapped in a {@link StoreException}).
+     */
+    public <T> T inTransaction(TransactionWork<T> work) {
+        lock.lock();
+        if (lock.getHoldCount() > 1) {
+            // nested call: part of the caller's transaction
+            try {
+                return work.run(new Tx(connection));
+            } catch (SQLException e) {
+                throw translate(file.toString(), e);
+            } finally {
+                lock.unlock();
+            }
+        }
+        try {
+            connection.setAutoCommit(false);
+            try {
+                T result = work.run(new Tx(connection));
+                connection.commit();
+                return result;
+            } catch (SQLException | RuntimeException | Error e) {
+                try {
+                    connection.rollback();
+                } catch (SQLException suppressed) {
+                    e.addSuppressed(suppressed);
+                }
+                throw e;
+            }
+        } catch (SQLException e) {
+            throw translate(file.toString(), e);
+        } finally {
+            try {
+                connection.setAutoCommit(true);
+            } catch (SQLException ignored) {
+                // the connection is broken; the next call reports it
+            }
+            lock.unlock();
+        }
+    }
+
+    /**
+     * Writes a consistent copy of the whole file to {@code target} while the database stays open (SQLite
+     * online backup). An existing target is replaced.
+     */
+    public void backupTo(Path target) {
+        lock.lock();
+        try (Statement s = connection.createStatement()) {
+            Files.deleteIfExists(target);
+            s.executeUpdate("backup to '" + target.toAbsolutePath().toString().replace("'", "''") + "'");
+        } catch (SQLException e) {
+            throw translate(file.toString(), e);
+        } catch (IOException e) {
+            throw new StoreException("Cannot write the backup " + target + ": " + e.getMessage(), e);
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    /**
+     * Replaces the whole content of this file with the backup at {@code source} (SQLite online restore).
+     * The backup must be a Shapetrail file; it is checked before anything is replaced.
+     */
+    public void restoreFrom(Path source) {
+        if (!Files.isRegularFile(source)) {
+            throw new StoreException("The backup " + source + " does not exist.");
+        }
+        try (Database check = Database.openReadOnlyCheck(source)) {
+            check.schemaVersion();
+        }
+        lock.lock();
+        try (Statement s = connection.createStatement()) {
+            s.executeUpdate("restore from '" + source.toAbsolutePath().toString().replace("'", "''") + "'");
+            int version = Migrations.currentVersion(connection);
+            if (version < Migrations.latest()) {
+                Migrations.migrate(connection, version, Migrations.latest());
+            }
+        } catch (SQLException e) {
+            throw translate(file.toString(), e);
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    private static Database openReadOnlyCheck(Path source) {
+        SQLiteConfig config = new SQLiteConfig();
+        config.setReadOnly(true);
+        SQLiteDataSource ds = new SQLiteDataSource(config);
+        ds.setUrl("jdbc:sqlite:" + source.toAbsolutePath());
+        try {
+            Connection c = ds.getConnection();
+            int v = Migrations.currentVersion(c);
+            if (v < 1 || v > Migrations.latest()) {
+                c.close();
+                throw new StoreException("The file " + source + " is not a Shapetrail backup this version can read"
+                        + " (schema " + v + ").");
+            }
+            return new Database(source.toAbsolutePath(), c, null);
+        } catch (SQLException e) {
+            throw translate(source.toString(), e);
+        }
+    }
+
+    /** {@code PRAGMA integrity_check}: "ok" for a sound file, otherwise SQLite's description. */
+    public String integrityCheck() {
+        return inTransaction(tx -> {
+            try (Statement s = tx.connection().createStatement();
+                 var rs = s.executeQuery("PRAGMA integrity_check")) {
+                StringBuilder sb = new StringBuilder();
+                while (rs.next()) {
+                    sb.append(sb.length() == 0 ? "" : "\n").append(rs.getString(1));
+                }
+                return sb.toString();
+            }
+        });
+    }
+
+    @Override
+    public void close() {
+        lock.lock();
+        try {
+            connection.close();
+        } catch (SQLException e) {
+            throw translate(file.toString(), e);
+        } finally {
+            lock.unlock();
+        }
+    }
+
+    static StoreException translate(String file, SQLException e) {
+        if (e instanceof SQLiteException se) {
+            SQLiteErrorCode code = se.getResultCode();
+            if (code == SQLiteErrorCode.SQLITE_BUSY || code == SQLiteErrorCode.SQLITE_LOCKED
+                    || code.name().startsWith("SQLITE_BUSY")) {
+                return new FileBusyException(file, e);
+            }
+            if (code.name().startsWith("SQLITE_CONSTRAINT_FOREIGNKEY")) {
+                return new StoreException("That change would leave a reference to a record that does not exist"
+                        + " (or remove one that others still refer to); nothing was changed.", e);
+            }
+            if (code == SQLiteErrorCode.SQLITE_NOTADB) {
+                return new StoreException("The file " + file + " is not a Shapetrail database.", e);
+            }
+        }
+        return new StoreException("The database file " + file + " could not be used: " + e.getMessage(), e);
+    }
+}

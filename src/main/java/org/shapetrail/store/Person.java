@@ -1,0 +1,51 @@
+package org.shapetrail.store;
+
+import java.time.LocalDate;
+import java.util.Objects;
+import org.shapetrail.measure.Sex;
+
+/**
+ * A person followed over time.
+ *
+ * @param id database id, 0 before the person is saved
+ * @param fatherStatureCm father's stature in cm, or null when not recorded
+ * @param motherStatureCm mother's stature in cm, or null when not recorded
+ */
+public record Person(long id, String displayName, Sex sex, LocalDate birthDate, Double fatherStatureCm,
+                     Double motherStatureCm, String notes, Consent consent) {
+    public Person {
+        Objects.requireNonNull(displayName, "displayName");
+        if (displayName.isBlank()) {
+            throw new IllegalArgumentException("a person needs a name");
+        }
+        Objects.requireNonNull(sex, "sex");
+        Objects.requireNonNull(birthDate, "birthDate");
+        notes = notes == null ? "" : notes;
+        consent = consent == null ? Consent.NONE : consent;
+        parentStature("father's stature", fatherStatureCm);
+        parentStature("mother's stature", motherStatureCm);
+    }
+
+    private static void parentStature(String what, Double cm) {
+        if (cm != null && (!Double.isFinite(cm) || cm < 120 || cm > 230)) {
+            throw new IllegalArgumentException(what + " " + cm + " cm is outside 120–230 cm; enter it in cm");
+        }
+    }
+
+    /** A person not yet saved. */
+    public static Person draft(String displayName, Sex sex, LocalDate birthDate) {
+        return new Person(0, displayName, sex, birthDate, null, null, "", Consent.NONE);
+    }
+
+    public Person withId(long newId) {
+        return new Person(newId, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, consent);
+    }
+
+    public Person withConsent(Consent c) {
+        return new Person(id, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, c);
+    }
+
+    public Person withParents(Double fatherCm, Double motherCm) {
+        return new Person(id, displayName, sex, birthDate, fatherCm, motherCm, notes, consent);
+    }
+}
