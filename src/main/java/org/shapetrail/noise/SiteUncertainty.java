@@ -1,0 +1,48 @@
+package org.shapetrail.noise;
+
+import java.util.EnumMap;
+import java.util.Map;
+import org.shapetrail.measure.RepeatOutcome;
+import org.shapetrail.measure.Site;
+
+/**
+ * The standard error of each final site value of a visit: the measurer's single-trial SD reduced by the
+ * number of trials the value rests on, plus any biological variation.
+ */
+public final class SiteUncertainty {
+    /**
+     * Variance of the median of three independent standard normal draws: 0.4487 (order statistics; from
+     * memory, checked by simulation in the tests).
+     */
+    public static final double MEDIAN_OF_THREE_VARIANCE = 0.4487;
+
+    private SiteUncertainty() {
+    }
+
+    /** Factor on the single-trial SD for a value made by the repeat rule. */
+    public static double trialFactor(RepeatOutcome.Status status) {
+        return switch (status) {
+            case SINGLE -> 1.0;
+            case MEAN_OF_TWO -> Math.sqrt(0.5);
+            case MEDIAN_OF_THREE -> Math.sqrt(MEDIAN_OF_THREE_VARIANCE);
+            case THIRD_TRIAL_NEEDED -> throw new IllegalArgumentException("a site waiting for a third trial has no value");
+        };
+    }
+
+    /** Standard error of every site with a value. */
+    public static Map<Site, Double> of(Map<Site, RepeatOutcome> outcomes, ErrorProfile profile,
+                                       BiologicalVariation biological) {
+        Map<Site, Double> out = new EnumMap<>(Site.class);
+        for (Map.Entry<Site, RepeatOutcome> e : outcomes.entrySet()) {
+            RepeatOutcome o = e.getValue();
+            if (o.value().isEmpty()) {
+                continue;
+            }
+            double v = o.value().getAsDouble();
+            double measurement = profile.at(e.getKey()).singleTrialSd(v) * trialFactor(o.status());
+            double bio = biological.sd(e.getKey());
+            out.put(e.getKey(), Math.sqrt(measurement * measurement + bio * bio));
+        }
+        return out;
+    }
+}
