@@ -1,0 +1,33 @@
+package org.shapetrail.growth;
+
+import java.util.Locale;
+import java.util.Objects;
+
+/**
+ * A maturity-offset estimate with what a reader must know about it.
+ *
+ * @param method the equation used
+ * @param offsetYears years from PHV (negative before)
+ * @param ageAtPhv estimated age at PHV = age − offset
+ * @param seeYears the published standard error of estimate, years
+ * @param status pre / circa / post PHV
+ * @param timing early / on time / late against the reference mean ± 1 year
+ */
+public record MaturityEstimate(MaturityMethod method, double offsetYears, double ageAtPhv, double seeYears,
+                               MaturityStatus status, MaturityTiming timing) {
+    /** The caution shown with every estimate. */
+    public static final String CAUTION = "Estimates carry about ±0.6 years of error and are pulled towards the"
+            + " average: early maturers tend to be estimated later, and late maturers earlier, than they are.";
+
+    public MaturityEstimate {
+        Objects.requireNonNull(method);
+        Objects.requireNonNull(status);
+        Objects.requireNonNull(timing);
+    }
+
+    /** E.g. "circa-PHV, offset −0.4 y (± 0.59), age at PHV 13.9 (Mirwald et al. 2002)". */
+    public String summary() {
+        return String.format(Locale.ROOT, "%s, offset %+.1f y (± %.2f), estimated age at PHV %.1f (%s)",
+                status.words(), offsetYears, seeYears, ageAtPhv, method.citation());
+    }
+}
