@@ -28,9 +28,11 @@ public final class ObservedPhv {
     public static final int MIN_VISITS = 8;
     /** Shortest span of ages accepted, years. */
     public static final double MIN_SPAN_YEARS = 2.0;
+    /** A peak closer than this to the first or last visit is not reported: the curve is not held there, years. */
+    public static final double EDGE_YEARS = 0.5;
     /** Largest standard error of the age at peak for which a peak is reported, years. */
     public static final double MAX_SE_YEARS = 0.5;
-    /** The peak must stand this far above the velocity at both ends of the series, cm/year. */
+    /** The peak must stand this far above the velocity at one end of the series at least, cm/year. */
     public static final double MIN_RISE_CM_PER_YEAR = 1.0;
 
     private ObservedPhv() {
@@ -103,10 +105,10 @@ public final class ObservedPhv {
             double age = curve.ageAtPeakVelocity();
             double velocity = curve.velocityCmPerYear(age);
             double se = seOfAgeAtPeak(opt, q, n);
-            if (age < t[0] + 0.25 || age > t[n - 1] - 0.25) {
+            if (age < t[0] + EDGE_YEARS || age > t[n - 1] - EDGE_YEARS) {
                 return new Result(Status.PEAK_OUTSIDE_VISITS, Double.NaN, Double.NaN, Double.NaN, rms, n, curve);
             }
-            double rise = velocity - Math.max(curve.velocityCmPerYear(t[0]), curve.velocityCmPerYear(t[n - 1]));
+            double rise = velocity - Math.min(curve.velocityCmPerYear(t[0]), curve.velocityCmPerYear(t[n - 1]));
             if (!(se <= MAX_SE_YEARS) || rise < MIN_RISE_CM_PER_YEAR) {
                 return new Result(Status.UNCERTAIN, Double.NaN, Double.NaN, se, rms, n, curve);
             }

@@ -143,8 +143,8 @@ public final class DemoAcademy {
             Sex sex = male ? Sex.MALE : Sex.FEMALE;
             String first = male ? FIRST_BOYS[boys++] : FIRST_GIRLS[girls++];
             String name = i == 13 ? "Νεφέλη Ανδρέου" : first + " " + SURNAMES[i];
-            // ages 10 to 16 at the start of the record
-            double ageAtStart = 10.0 + (i % 7) + rnd.nextDouble() * 0.9;
+            // ages 10 to 15 at the start of the record, so that many pass their spurt during it
+            double ageAtStart = 10.0 + (i % 6) + rnd.nextDouble() * 0.9;
             LocalDate birth = RECORD_START.minusDays(Math.round(ageAtStart * 365.25));
             String sport = i % 3 == 0 ? "rowing" : "football";
             PreeceBaines pb;

@@ -1,0 +1,27 @@
+package org.shapetrail.history;
+
+import java.util.Optional;
+import org.shapetrail.growth.MaturityEstimate;
+import org.shapetrail.growth.ObservedPhv;
+import org.shapetrail.growth.Velocity;
+
+/**
+ * A junior's growth at their latest visit.
+ *
+ * @param latestVelocity stature velocity from the latest visit back to the most recent one at least
+ *     three months earlier (null with fewer than two such visits)
+ * @param maturity maturity offset at the latest visit (null for adults or without the needed sites)
+ * @param observedPhv the person's own peak, or why there is none
+ * @param midParentTargetCm mid-parent target height, or null without both parents' statures
+ * @param rapidGrowth true when the latest velocity is above the alert threshold
+ */
+public record GrowthSummary(Velocity latestVelocity, MaturityEstimate maturity, ObservedPhv.Result observedPhv,
+                            Double midParentTargetCm, Double percentOfTarget, boolean rapidGrowth) {
+    public Optional<Velocity> velocity() {
+        return Optional.ofNullable(latestVelocity);
+    }
+
+    public Optional<MaturityEstimate> maturityEstimate() {
+        return Optional.ofNullable(maturity);
+    }
+}

@@ -1,0 +1,164 @@
+package org.shapetrail.history;
+
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.shapetrail.growth.DecimalAge;
+import org.shapetrail.growth.MaturityEstimate;
+import org.shapetrail.growth.MaturityMethod;
+import org.shapetrail.growth.MaturityOffset;
+import org.shapetrail.growth.ObservedPhv;
+import org.shapetrail.growth.TargetHeight;
+import org.shapetrail.growth.Velocity;
+import org.shapetrail.measure.Problem;
+import org.shapetrail.measure.Site;
+import org.shapetrail.measure.VisitCheck;
+import org.shapetrail.measure.VisitEvaluation;
+import org.shapetrail.noise.ChangeAssessment;
+import org.shapetrail.noise.ChangeVerdict;
+import org.shapetrail.noise.ComponentCovariance;
+import org.shapetrail.noise.ErrorProfile;
+import org.shapetrail.noise.ErrorPropagation;
+import org.shapetrail.noise.SiteUncertainty;
+import org.shapetrail.somatotype.HeathCarterInput;
+import org.shapetrail.somatotype.SomatotypeRater;
+import org.shapetrail.store.Person;
+import org.shapetrail.store.Visit;
+
+/** Computes a {@link PersonHistory} from raw visits with the file's noise model and the user's settings. */
+public final class HistoryBuilder {
+    /** Maturity offset is reported up to this age (the equations were built on juniors). */
+    public static final double MAX_MATURITY_AGE = 18.0;
+
+    private final Academy academy;
+    private final NoiseModel noise;
+    private final AnalysisSettings settings;
+
+    public HistoryBuilder(Academy academy, NoiseModel noise, AnalysisSettings settings) {
+        this.academy = academy;
+        this.noise = noise;
+        this.settings = settings;
+    }
+
+    /** Builds the model of a whole file with the given settings. */
+    public static HistoryBuilder of(Academy academy, AnalysisSettings settings) {
+        return new HistoryBuilder(academy, NoiseModel.build(academy, settings.defaults()), settings);
+    }
+
+    public NoiseModel noise() {
+        return noise;
+    }
+
+    public Academy academy() {
+        return academy;
+    }
+
+    public AnalysisSettings settings() {
+        return settings;
+    }
+
+    /** One visit computed. */
+    public VisitResult result(Person p, Visit v) {
+        VisitEvaluation ev = VisitCheck.evaluate(v.trials());
+        SomatotypeRater.Outcome o = SomatotypeRater.rate(v.trials(), settings.endomorphy());
+        ErrorProfile profile = noise.profileOf(v.measurerId());
+        Map<Site, Double> se = SiteUncertainty.of(ev.outcomes(), profile, settings.biological());
+        ComponentCovariance cov = ComponentCovariance.ZERO;
+        List<Problem> missing = List.of();
+        if (o.rated()) {
+            cov = ErrorPropagation.covariance(HeathCarterInput.fromFinalValues(ev.finalValues()), se,
+                    settings.endomorphy());
+        } else {
+            missing = o.problems();
+        }
+        double age = DecimalAge.years(p.birthDate(), v.measuredAt().toLocalDate());
+        return new VisitResult(v, academy.measurer(v.measurerId()), age, ev.finalValues(),
+                o.rated() ? o.somatotype() : null, missing, cov, profile.describe(HeathCarterInput.SITES), se);
+    }
+
+    /** The whole history of a person. */
+    public PersonHistory history(Person p) {
+        List<VisitResult> results = new ArrayList<>();
+        for (Visit v : academy.visitsOf(p.id())) {
+            results.add(result(p, v));
+        }
+        List<PersonHistory.Change> changes = new ArrayList<>();
+        VisitResult previous = null;
+        VisitResult first = null;
+        for (VisitResult r : results) {
+            if (r.somatotype() == null) {
+                continue;
+            }
+            if (first == null) {
+                first = r;
+            }
+            if (previous != null) {
+                changes.add(new PersonHistory.Change(previous, r, verdict(previous, r)));
+            }
+            previous = r;
+        }
+        ChangeVerdict firstToLast = first != null && previous != first ? verdict(first, previous) : null;
+        return new PersonHistory(p, results, changes, firstToLast, growth(p, results));
+    }
+
+    /** The verdict on the change between two rated visits (measurers possibly different). */
+    public ChangeVerdict verdict(VisitResult a, VisitResult b) {
+        String basis = a.basis().equals(b.basis()) ? a.basis() : a.basis() + " and " + b.basis();
+        return ChangeAssessment.assess(a.somatotype().rating(), a.covariance(), b.somatotype().rating(),
+                b.covariance(), basis);
+    }
+
+    private GrowthSummary growth(Person p, List<VisitResult> results) {
+        List<VisitResult> withStature = results.stream().filter(r -> r.value(Site.STATURE).isPresent()).toList();
+        Velocity velocity = null;
+        if (!withStature.isEmpty()) {
+            VisitResult last = withStature.get(withStature.size() - 1);
+            for (int i = withStature.size() - 2; i >= 0; i--) {
+                VisitResult earlier = withStature.get(i);
+                long days = ChronoUnit.DAYS.between(earlier.visit().measuredAt().toLocalDate(),
+                        last.visit().measuredAt().toLocalDate());
+                if (days >= Velocity.MIN_READABLE_DAYS) {
+                    velocity = Velocity.between(earlier.finalValues().get(Site.STATURE),
+                            earlier.standardErrors().get(Site.STATURE), last.finalValues().get(Site.STATURE),
+                            last.standardErrors().get(Site.STATURE), days);
+                    break;
+                }
+            }
+        }
+        MaturityEstimate maturity = null;
+        Double target = null;
+        Double percent = null;
+        if (!withStature.isEmpty()) {
+            VisitResult last = withStature.get(withStature.size() - 1);
+            double stature = last.finalValues().get(Site.STATURE);
+            if (last.ageYears() < MAX_MATURITY_AGE && last.ageYears() >= 8) {
+                Double sh = last.finalValues().get(Site.SITTING_HEIGHT);
+                Double mass = last.finalValues().get(Site.BODY_MASS);
+                if (sh != null && mass != null) {
+                    maturity = MaturityOffset.estimate(MaturityMethod.MIRWALD_2002, p.sex(), last.ageYears(), stature,
+                            sh, mass);
+                } else if (sh != null || p.sex() == org.shapetrail.measure.Sex.FEMALE) {
+                    maturity = MaturityOffset.estimate(MaturityMethod.MOORE_2015, p.sex(), last.ageYears(), stature,
+                            sh == null ? Double.NaN : sh, Double.NaN);
+                }
+            }
+            if (p.fatherStatureCm() != null && p.motherStatureCm() != null) {
+                target = TargetHeight.midParent(p.sex(), p.fatherStatureCm(), p.motherStatureCm());
+                percent = TargetHeight.percentAttained(stature, target);
+            }
+        }
+        List<ObservedPhv.Point> points = new ArrayList<>();
+        for (VisitResult r : withStature) {
+            points.add(new ObservedPhv.Point(r.ageYears(), r.finalValues().get(Site.STATURE)));
+        }
+        ObservedPhv.Result phv = ObservedPhv.fit(points);
+        boolean rapid = velocity != null && last(results).ageYears() < MAX_MATURITY_AGE
+                && settings.alert().raisedBy(velocity);
+        return new GrowthSummary(velocity, maturity, phv, target, percent, rapid);
+    }
+
+    private static VisitResult last(List<VisitResult> results) {
+        return results.get(results.size() - 1);
+    }
+}
