@@ -7,7 +7,8 @@ import picocli.CommandLine.Command;
 /** The command line: {@code java -jar shapetrail.jar COMMAND ...}; see docs/cli.md. */
 @Command(name = "shapetrail", mixinStandardHelpOptions = true, version = "Shapetrail 0.1",
         description = "Somatotype, growth and measurement-noise tools for practitioners.",
-        subcommands = {RateCommand.class, PeopleCommand.class, BackupCommand.class, RestoreCommand.class,
+        subcommands = {RateCommand.class, PeopleCommand.class, TemCommand.class, ChangesCommand.class,
+            GrowthCommand.class, BackupCommand.class, RestoreCommand.class,
             ExportPersonCommand.class, ErasePersonCommand.class, CommandLine.HelpCommand.class})
 public final class ShapetrailCli implements Runnable {
     @CommandLine.Spec

@@ -60,6 +60,12 @@ public record Academy(List<Person> people, List<Measurer> measurers, List<Squad>
         return visits.stream().filter(v -> v.personId() == personId).toList();
     }
 
+    /** Ids of the people who belonged to the squad on {@code day}. */
+    public List<Long> membersOn(long squadId, java.time.LocalDate day) {
+        return memberships.stream().filter(m -> m.squadId() == squadId && m.covers(day)).map(Membership::personId)
+                .distinct().toList();
+    }
+
     /** Ids of the people who belonged to the squad at any time. */
     public List<Long> membersOf(long squadId) {
         return memberships.stream().filter(m -> m.squadId() == squadId).map(Membership::personId).distinct().toList();

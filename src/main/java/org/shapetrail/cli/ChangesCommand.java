@@ -1,0 +1,73 @@
+package org.shapetrail.cli;
+
+import java.io.PrintWriter;
+import java.util.concurrent.Callable;
+import org.shapetrail.history.Academy;
+import org.shapetrail.history.AnalysisSettings;
+import org.shapetrail.history.HistoryBuilder;
+import org.shapetrail.history.PersonHistory;
+import org.shapetrail.noise.ChangeVerdict;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.Person;
+import org.shapetrail.store.StoreException;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code changes ID}: each change of a person's somatotype with its verdict against measurement noise. */
+@Command(name = "changes", mixinStandardHelpOptions = true,
+        description = "Report a person's somatotype changes (consecutive visits and first to last) with their"
+                + " noise verdicts.")
+final class ChangesCommand implements Callable<Integer> {
+    @Mixin
+    DbOption db;
+
+    @Parameters(index = "0", paramLabel = "ID", description = "The person's id (see the people command).")
+    long personId;
+
+    @Option(names = "--format", description = "text (default) or csv", defaultValue = "text",
+            converter = FormatConverter.class)
+    OutputFormat format;
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PersonHistory h;
+        try (Database d = db.open()) {
+            Academy a = Academy.load(d);
+            Person p = a.person(personId).orElseThrow(() -> new StoreException("There is no person with id "
+                    + personId + "."));
+            h = HistoryBuilder.of(a, AnalysisSettings.standard()).history(p);
+        }
+        Table t = new Table("from", "to", "from_rating", "to_rating", "sad", "sad_noise_95", "d2", "p",
+                "endo_change", "endo_mdc95", "meso_change", "meso_mdc95", "ecto_change", "ecto_mdc95", "verdict",
+                "repeatability");
+        for (PersonHistory.Change c : h.changes()) {
+            add(t, c.from().visit().measuredAt().toLocalDate().toString(),
+                    c.to().visit().measuredAt().toLocalDate().toString(), c.verdict());
+        }
+        if (h.firstToLast() != null && h.changes().size() > 1) {
+            var rated = h.rated();
+            add(t, rated.get(0).visit().measuredAt().toLocalDate() + " (first)",
+                    rated.get(rated.size() - 1).visit().measuredAt().toLocalDate() + " (last)", h.firstToLast());
+        }
+        if (format == OutputFormat.TEXT) {
+            out.println(h.person().displayName() + ": " + h.rated().size() + " rated visit(s)");
+        }
+        t.write(out, format);
+        return 0;
+    }
+
+    private static void add(Table t, String from, String to, ChangeVerdict v) {
+        t.row(from, to, v.from().toDisplayString(), v.to().toDisplayString(), Table.num(v.sad(), 2),
+                Table.num(v.sadNoise95(), 2), Table.num(v.d2(), 2), Table.num(v.pValue(), 4),
+                Table.num(v.change()[0], 2), Table.num(v.mdc95()[0], 2), Table.num(v.change()[1], 2),
+                Table.num(v.mdc95()[1], 2), Table.num(v.change()[2], 2), Table.num(v.mdc95()[2], 2),
+                v.verdict().words(), v.basis());
+    }
+}

@@ -1,0 +1,102 @@
+package org.shapetrail.cli;
+
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.shapetrail.growth.MaturityEstimate;
+import org.shapetrail.growth.Velocity;
+import org.shapetrail.history.Academy;
+import org.shapetrail.history.AnalysisSettings;
+import org.shapetrail.history.GrowthSummary;
+import org.shapetrail.history.HistoryBuilder;
+import org.shapetrail.history.PersonHistory;
+import org.shapetrail.measure.Site;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.Person;
+import org.shapetrail.store.Squad;
+import org.shapetrail.store.StoreException;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code growth}: stature velocity, maturity and rapid-growth alerts for a person or a squad. */
+@Command(name = "growth", mixinStandardHelpOptions = true,
+        description = "Report growth and maturity (velocity, maturity offset, observed PHV, target height,"
+                + " rapid-growth alert) for a person or a squad.")
+final class GrowthCommand implements Callable<Integer> {
+    @Mixin
+    DbOption db;
+
+    static final class Who {
+        @Option(names = "--person", paramLabel = "ID", description = "one person's id")
+        Long person;
+
+        @Option(names = "--squad", paramLabel = "NAME", description = "the squad's current members")
+        String squad;
+    }
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    Who who;
+
+    @Option(names = "--format", description = "text (default) or csv", defaultValue = "text",
+            converter = FormatConverter.class)
+    OutputFormat format;
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        List<PersonHistory> histories = new ArrayList<>();
+        try (Database d = db.open()) {
+            Academy a = Academy.load(d);
+            HistoryBuilder b = HistoryBuilder.of(a, AnalysisSettings.standard());
+            if (who.person != null) {
+                Person p = a.person(who.person).orElseThrow(() -> new StoreException("There is no person with id "
+                        + who.person + "."));
+                histories.add(b.history(p));
+            } else {
+                Squad s = a.squads().stream().filter(q -> q.name().equalsIgnoreCase(who.squad.strip())).findFirst()
+                        .orElseThrow(() -> new StoreException("There is no squad called \"" + who.squad + "\"; the"
+                                + " squads are: " + String.join(", ", a.squads().stream().map(Squad::name).toList())));
+                for (long id : a.membersOn(s.id(), java.time.LocalDate.now())) {
+                    histories.add(b.history(a.person(id).orElseThrow()));
+                }
+            }
+        }
+        Table t = new Table("id", "name", "age", "stature_cm", "velocity_cm_per_year", "velocity_se", "interval_years",
+                "rapid_growth", "maturity_status", "maturity_offset_years", "estimated_age_at_phv", "see_years",
+                "method", "observed_phv", "mid_parent_target_cm", "percent_of_target");
+        for (PersonHistory h : histories) {
+            if (h.visits().isEmpty()) {
+                t.row(h.person().id(), h.person().displayName(), "", "", "", "", "", "", "", "", "", "", "",
+                        "no visits", "", "");
+                continue;
+            }
+            var last = h.latest().orElseThrow();
+            GrowthSummary g = h.growth();
+            Velocity v = g.latestVelocity();
+            MaturityEstimate m = g.maturity();
+            t.row(h.person().id(), h.person().displayName(), Table.num(last.ageYears(), 1),
+                    last.value(Site.STATURE).map(x -> Table.num(x, 1)).orElse(""),
+                    v == null ? "" : Table.num(v.perYear(), 1), v == null ? "" : Table.num(v.sePerYear(), 1),
+                    v == null ? "" : Table.num(v.intervalYears(), 2), g.rapidGrowth() ? "yes" : "no",
+                    m == null ? "" : m.status().words(), m == null ? "" : Table.num(m.offsetYears(), 2),
+                    m == null ? "" : Table.num(m.ageAtPhv(), 1), m == null ? "" : Table.num(m.seeYears(), 2),
+                    m == null ? "" : m.method().citation(), g.observedPhv().describe(),
+                    g.midParentTargetCm() == null ? "" : Table.num(g.midParentTargetCm(), 1),
+                    g.percentOfTarget() == null ? "" : Table.num(g.percentOfTarget(), 1));
+        }
+        t.write(out, format);
+        if (format == OutputFormat.TEXT) {
+            out.println();
+            out.println("Maturity: " + MaturityEstimate.CAUTION);
+            out.println("Rapid growth: " + org.shapetrail.growth.GrowthAlert.CAUTION);
+        }
+        return 0;
+    }
+}

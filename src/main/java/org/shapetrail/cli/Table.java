@@ -1,0 +1,73 @@
+package org.shapetrail.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+
+/** A report table written as aligned text or CSV; one place for both so every report reads the same. */
+final class Table {
+    private final List<String> header;
+    private final List<List<String>> rows = new ArrayList<>();
+
+    Table(String... header) {
+        this.header = List.of(header);
+    }
+
+    Table row(Object... cells) {
+        List<String> r = new ArrayList<>();
+        for (Object c : cells) {
+            r.add(c == null ? "" : c.toString());
+        }
+        rows.add(r);
+        return this;
+    }
+
+    static String num(double v, int decimals) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%." + decimals + "f", v) : "";
+    }
+
+    void write(PrintWriter out, OutputFormat format) {
+        if (format == OutputFormat.CSV) {
+            try {
+                CSVPrinter p = new CSVPrinter(out, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+                p.printRecord(header);
+                for (List<String> r : rows) {
+                    p.printRecord(r);
+                }
+                p.flush();
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+            return;
+        }
+        int[] w = new int[header.size()];
+        for (int i = 0; i < w.length; i++) {
+            w[i] = header.get(i).length();
+            for (List<String> r : rows) {
+                w[i] = Math.max(w[i], r.get(i).length());
+            }
+        }
+        line(out, header, w);
+        for (List<String> r : rows) {
+            line(out, r, w);
+        }
+        out.flush();
+    }
+
+    private static void line(PrintWriter out, List<String> cells, int[] w) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < cells.size(); i++) {
+            String c = cells.get(i);
+            sb.append(c).append(" ".repeat(w[i] - c.length()));
+            if (i + 1 < cells.size()) {
+                sb.append("  ");
+            }
+        }
+        out.println(sb.toString().stripTrailing());
+    }
+}
