@@ -1,0 +1,25 @@
+package org.shapetrail.chart;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.shapetrail.history.PersonHistory;
+import org.shapetrail.history.VisitResult;
+import org.shapetrail.noise.Verdict;
+
+/** Ready-made charts of the product, built from computed histories. */
+public final class Charts {
+    private Charts() {
+    }
+
+    /** A person's migration path: every rated visit, noise ellipses, steps styled by verdict. */
+    public static ChartModel migration(PersonHistory h, boolean ellipses, java.util.Locale locale) {
+        List<SomatochartBuilder.PathPoint> pts = new ArrayList<>();
+        for (VisitResult r : h.rated()) {
+            pts.add(new SomatochartBuilder.PathPoint(r.visit().measuredAt().toLocalDate(), r.somatotype().rating(),
+                    r.covariance(), "visit:" + r.visit().id()));
+        }
+        List<Verdict> verdicts = h.changes().stream().map(c -> c.verdict().verdict()).toList();
+        return new SomatochartBuilder(h.person().displayName(), locale)
+                .path(h.person().displayName(), pts, verdicts, ellipses).buildAroundData(7);
+    }
+}
