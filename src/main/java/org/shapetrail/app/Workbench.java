@@ -1,34 +1,419 @@
 package org.shapetrail.app;
 
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayDeque;
+import java.util.Deque;
+import java.util.Locale;
+import java.util.Optional;
+import javafx.beans.property.SimpleStringProperty;
 import javafx.geometry.Insets;
+import javafx.geometry.Pos;
 import javafx.scene.Parent;
+import javafx.scene.control.Alert;
+import javafx.scene.control.Button;
+import javafx.scene.control.ButtonType;
+import javafx.scene.control.CheckBox;
+import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
+import javafx.scene.control.ProgressBar;
+import javafx.scene.control.Spinner;
+import javafx.scene.control.SplitPane;
+import javafx.scene.control.Tab;
+import javafx.scene.control.TabPane;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableView;
+import javafx.scene.control.TextField;
+import javafx.scene.control.ToggleButton;
 import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
+import javafx.stage.FileChooser;
+import javafx.util.StringConverter;
+import org.shapetrail.chart.fx.ChartCanvas;
+import org.shapetrail.growth.GrowthAlert;
+import org.shapetrail.growth.MaturityStatus;
+import org.shapetrail.history.AnalysisSettings;
+import org.shapetrail.history.NoiseModel;
+import org.shapetrail.history.PersonHistory;
+import org.shapetrail.measure.Site;
+import org.shapetrail.noise.BiologicalVariation;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.Squad;
+import org.shapetrail.store.Visit;
 
-/** The main window's content: a header, the working area and the standing caution. */
+/**
+ * The main window's content: the people browser on the left; the person, squad, measurers and settings
+ * pages on the right; the status line with progress and cancel; the standing caution at the foot.
+ */
 public final class Workbench {
+    private final WorkbenchViewModel vm;
+    private final Locale locale;
     private final BorderPane root = new BorderPane();
+    private final PersonPane person = new PersonPane();
+    private final TabPane pages = new TabPane();
+    private final Tab personTab = new Tab("Person");
+    private final Tab squadTab = new Tab("Squad");
+    private final Tab measurersTab = new Tab("Measurers");
+    private final Tab settingsTab = new Tab("Settings");
+    private final ComboBox<String> squadChoice = new ComboBox<>();
+    private final Label squadSummary = new Label();
+    private final VBox squadBlocks = new VBox(2);
+    private final TableView<PersonRow> squadMembers;
+    private final ChartCanvas squadChart = new ChartCanvas();
+    private final TableView<NoiseModel.TemRow> tem = new TableView<>();
+    private final ToggleButton dark = new ToggleButton("Dark theme");
+    /** Earlier versions of visits changed in this session, newest first, for undo. */
+    private final Deque<Runnable> undo = new ArrayDeque<>();
 
-    public Workbench() {
+    public Workbench(WorkbenchViewModel vm, Locale locale) {
+        this.vm = vm;
+        this.locale = locale;
+        squadMembers = PeopleTable.create("squad-members", locale, true);
+        root.getStyleClass().add("workbench");
+        root.setTop(header());
+        root.setCenter(body());
+        root.setBottom(footer());
+        vm.loadedProperty().addListener((o, a, b) -> refreshPages());
+        vm.selectedProperty().addListener((o, a, b) -> showPerson());
+    }
+
+    private Parent header() {
         Label title = new Label("Shapetrail");
         title.setId("app-title");
         title.getStyleClass().add("app-title");
-        Label subtitle = new Label("Somatotype, growth and measurement noise, visit by visit.");
-        subtitle.getStyleClass().add("app-subtitle");
-        VBox header = new VBox(2, title, subtitle);
-        header.getStyleClass().add("app-header");
-        header.setPadding(new Insets(12, 16, 12, 16));
-        root.setTop(header);
+        Label file = new Label();
+        file.setId("file-name");
+        file.getStyleClass().add("app-subtitle");
+        vm.loadedProperty().addListener((o, a, b) -> file.setText(b == null ? "" : b.file().toString()));
+        Button open = new Button("Open file…");
+        open.setId("open-file");
+        open.setOnAction(e -> chooseFile());
+        Region gap = new Region();
+        HBox.setHgrow(gap, Priority.ALWAYS);
+        dark.setId("dark-theme");
+        dark.selectedProperty().addListener((o, a, b) -> {
+            if (b) {
+                root.getStyleClass().add("dark");
+            } else {
+                root.getStyleClass().remove("dark");
+            }
+        });
+        HBox bar = new HBox(12, title, file, gap, open, dark);
+        bar.setAlignment(Pos.CENTER_LEFT);
+        bar.getStyleClass().add("app-header");
+        bar.setPadding(new Insets(10, 14, 10, 14));
+        return bar;
+    }
+
+    private Parent body() {
+        TextField search = new TextField();
+        search.setId("search");
+        search.setPromptText("Find a person (Ctrl+F)");
+        search.textProperty().bindBidirectional(vm.searchProperty());
+        ComboBox<String> squad = new ComboBox<>(vm.squads());
+        squad.setId("squad-filter");
+        squad.valueProperty().bindBidirectional(vm.squadProperty());
+        ComboBox<AgeBand> age = new ComboBox<>();
+        age.setId("age-filter");
+        age.getItems().setAll(AgeBand.values());
+        age.valueProperty().bindBidirectional(vm.ageBandProperty());
+        ComboBox<MaturityStatus> maturity = new ComboBox<>();
+        maturity.setId("maturity-filter");
+        maturity.getItems().add(null);
+        maturity.getItems().addAll(MaturityStatus.values());
+        maturity.setConverter(new StringConverter<>() {
+            @Override
+            public String toString(MaturityStatus m) {
+                return m == null ? "Any maturity" : m.words();
+            }
+
+            @Override
+            public MaturityStatus fromString(String s) {
+                return null;
+            }
+        });
+        maturity.valueProperty().bindBidirectional(vm.maturityProperty());
+        CheckBox rapid = new CheckBox("Rapid growth only");
+        rapid.setId("rapid-filter");
+        rapid.selectedProperty().bindBidirectional(vm.rapidOnlyProperty());
+        TableView<PersonRow> people = PeopleTable.create("people", locale, false);
+        people.setItems(vm.rows());
+        people.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            if (b != null) {
+                vm.selectedProperty().set(b);
+            }
+        });
+        Label count = new Label();
+        count.setId("people-count");
+        vm.rows().addListener((javafx.collections.ListChangeListener<PersonRow>) c -> count.setText(
+                vm.rows().size() + " shown · click a column to sort (e.g. Growth for the fastest growing)"));
+        HBox filters = new HBox(6, squad, age, maturity);
+        VBox left = new VBox(6, search, filters, rapid, people, count);
+        left.setPadding(new Insets(8));
+        VBox.setVgrow(people, Priority.ALWAYS);
+
+        person.onNewVisit(() -> enterVisit(null));
+        person.onEditVisit(line -> editVisit(line));
+        person.onDeleteVisit(line -> deleteVisit(line));
+        person.undo.setOnAction(e -> undoLast());
+        person.undo.setDisable(true);
+        personTab.setContent(person);
+        squadTab.setContent(squadPage());
+        measurersTab.setContent(measurersPage());
+        settingsTab.setContent(settingsPage());
+        pages.getTabs().addAll(personTab, squadTab, measurersTab, settingsTab);
+        pages.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        pages.setId("pages");
+        SplitPane split = new SplitPane(left, pages);
+        split.setDividerPositions(0.42);
+        return split;
+    }
+
+    private Parent squadPage() {
+        squadChoice.setId("squad-choice");
+        squadChoice.valueProperty().addListener((o, a, b) -> showSquad());
+        squadSummary.setId("squad-summary");
+        squadSummary.setWrapText(true);
+        squadChart.setId("squad-chart");
+        squadChart.setMinSize(300, 300);
+        squadChart.setOnSelect(id -> vm.rows().stream().filter(r -> ("person:" + r.id()).equals(id)).findFirst()
+                .ifPresent(r -> {
+                    vm.selectedProperty().set(r);
+                    pages.getSelectionModel().select(personTab);
+                }));
+        VBox head = new VBox(6, squadChoice, squadSummary, new Label("Training blocks"), squadBlocks);
+        head.setPadding(new Insets(10, 12, 8, 12));
+        BorderPane p = new BorderPane();
+        p.setTop(head);
+        SplitPane split = new SplitPane(squadMembers, squadChart);
+        split.setDividerPositions(0.5);
+        p.setCenter(split);
+        return p;
+    }
+
+    private Parent measurersPage() {
+        tem.setId("tem-table");
+        addTemColumn("Measurer", r -> r.measurer().name(), 120);
+        addTemColumn("Site", r -> r.site().label(), 170);
+        addTemColumn("People", r -> Integer.toString(r.estimate().people()), 60);
+        addTemColumn("TEM", r -> Numbers.fmt(locale, r.estimate().duplicateTem(), 3) + " " + r.site().unit().symbol(), 80);
+        addTemColumn("Relative TEM", r -> Numbers.fmt(locale, r.estimate().relativeTemPercent(), 2) + " %", 90);
+        addTemColumn("Target", r -> "≤ " + Numbers.fmt(locale, org.shapetrail.noise.TemTargets.target(r.site().kind()), 1)
+                + " %", 60);
+        addTemColumn("Standing", r -> r.standing().words(), 200);
+        addTemColumn("Verdicts use", r -> r.usesDefault() ? "default TEM (too few people)" : "own TEM", 170);
+        Label note = new Label("TEM from the first two trials of every site and visit (duplicate form). Targets:"
+                + " skinfolds ≤ 5 % (≤ 7.5 % entry level), other measures ≤ 1 % (≤ 1.5 %); common practice."
+                + " Below " + org.shapetrail.noise.DefaultErrors.MIN_PEOPLE + " people a site uses the default TEM.");
+        note.setWrapText(true);
+        VBox box = new VBox(8, note, tem);
+        box.setPadding(new Insets(10));
+        VBox.setVgrow(tem, Priority.ALWAYS);
+        return box;
+    }
+
+    private void addTemColumn(String name, java.util.function.Function<NoiseModel.TemRow, String> f, double w) {
+        TableColumn<NoiseModel.TemRow, String> c = new TableColumn<>(name);
+        c.setCellValueFactory(d -> new SimpleStringProperty(f.apply(d.getValue())));
+        c.setPrefWidth(w);
+        tem.getColumns().add(c);
+    }
+
+    private Parent settingsPage() {
+        Spinner<Double> threshold = new Spinner<>(3.0, 15.0, GrowthAlert.DEFAULT_CM_PER_YEAR, 0.5);
+        threshold.setId("alert-threshold");
+        threshold.setEditable(true);
+        Spinner<Double> mass = new Spinner<>(0.0, 3.0, AnalysisSettings.DEFAULT_MASS_DAY_TO_DAY_KG, 0.1);
+        mass.setId("mass-variation");
+        mass.setEditable(true);
+        Button apply = new Button("Recompute with these settings");
+        apply.setId("recompute");
+        apply.setOnAction(e -> {
+            AnalysisSettings s = vm.settings();
+            vm.recompute(new AnalysisSettings(s.endomorphy(), s.defaults(),
+                    new BiologicalVariation(java.util.Map.of(Site.BODY_MASS, mass.getValue())),
+                    new GrowthAlert(threshold.getValue())));
+        });
+        VBox box = new VBox(10,
+                new Label("Rapid-growth alert above (cm per year; common practice 7)"), threshold,
+                new Label("Body mass day-to-day variation added to measurement error (kg; 0 to leave out)"), mass,
+                apply);
+        box.setPadding(new Insets(12));
+        return box;
+    }
+
+    private Parent footer() {
+        ProgressBar bar = new ProgressBar();
+        bar.setId("progress");
+        bar.progressProperty().bind(vm.runner().progressProperty());
+        bar.visibleProperty().bind(vm.runner().busyProperty());
+        Button cancel = new Button("Cancel");
+        cancel.setId("cancel-work");
+        cancel.visibleProperty().bind(vm.runner().busyProperty());
+        cancel.setOnAction(e -> vm.runner().cancelCurrent());
+        Label status = new Label();
+        status.setId("status");
+        status.textProperty().bind(vm.statusProperty());
+        Label error = new Label();
+        error.setId("error");
+        error.getStyleClass().add("error-line");
+        error.textProperty().bind(vm.errorProperty());
+        HBox line = new HBox(10, status, bar, cancel, error);
+        line.setAlignment(Pos.CENTER_LEFT);
+        line.setPadding(new Insets(4, 14, 4, 14));
         Label caution = new Label(Cautions.SHAPE_NOT_WORTH);
         caution.setId("caution");
         caution.getStyleClass().add("caution");
         caution.setWrapText(true);
-        caution.setPadding(new Insets(6, 16, 6, 16));
-        root.setBottom(caution);
+        caution.setPadding(new Insets(6, 14, 6, 14));
+        return new VBox(line, caution);
+    }
+
+    private void refreshPages() {
+        Loaded l = vm.loadedProperty().get();
+        if (l == null) {
+            return;
+        }
+        String keep = squadChoice.getValue();
+        squadChoice.getItems().setAll(l.builder().academy().squads().stream().map(Squad::name).toList());
+        squadChoice.setValue(keep != null && squadChoice.getItems().contains(keep) ? keep
+                : squadChoice.getItems().isEmpty() ? null : squadChoice.getItems().get(0));
+        showSquad();
+        tem.getItems().setAll(l.builder().noise().temReport());
+        showPerson();
+    }
+
+    private void showPerson() {
+        Optional<PersonHistory> h = vm.selectedHistory();
+        if (h.isEmpty()) {
+            return;
+        }
+        Loaded l = vm.loadedProperty().get();
+        person.show(h.get(), WorkbenchViewModel.currentSquad(l.builder().academy(), h.get().person().id()), locale);
+    }
+
+    private void showSquad() {
+        Loaded l = vm.loadedProperty().get();
+        String name = squadChoice.getValue();
+        if (l == null || name == null) {
+            return;
+        }
+        l.builder().academy().squads().stream().filter(s -> s.name().equals(name)).findFirst().ifPresent(s -> {
+            SquadPage page = SquadPage.of(l, s, LocalDate.now(), locale);
+            squadSummary.setText(page.summary());
+            squadMembers.getItems().setAll(page.members());
+            squadBlocks.getChildren().setAll(page.blocks().isEmpty() ? java.util.List.of(new Label("none"))
+                    : page.blocks().stream().map(Label::new).toList());
+            squadChart.setModel(page.chart());
+        });
+    }
+
+    private void chooseFile() {
+        FileChooser fc = new FileChooser();
+        fc.setTitle("Open a Shapetrail file");
+        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Shapetrail files", "*.sqlite", "*.db"));
+        var f = fc.showOpenDialog(root.getScene().getWindow());
+        if (f != null) {
+            vm.open(f.toPath());
+        }
+    }
+
+    /** Opens the entry window for a new visit (or an edit) of the selected person. */
+    VisitEntryView entryFor(Visit editing) {
+        PersonHistory h = vm.selectedHistory().orElseThrow();
+        Loaded l = vm.loadedProperty().get();
+        return new VisitEntryView(new VisitEntryViewModel(l.file(), l.builder(), h, locale, editing),
+                root.getScene().getWindow());
+    }
+
+    void enterVisit(Visit editing) {
+        if (vm.selectedHistory().isEmpty()) {
+            return;
+        }
+        entryFor(editing).showAndWait().ifPresent(v -> vm.reload());
+    }
+
+    private Optional<Visit> stored(VisitLine line) {
+        Loaded l = vm.loadedProperty().get();
+        return l.builder().academy().visits().stream().filter(v -> v.id() == line.visitId()).findFirst();
+    }
+
+    private void editVisit(VisitLine line) {
+        stored(line).ifPresent(before -> {
+            Path file = vm.loadedProperty().get().file();
+            Optional<Visit> after = entryFor(before).showAndWait();
+            if (after.isPresent()) {
+                pushUndo("the edit of the visit of " + line.date(), () -> {
+                    try (Database db = Database.open(file)) {
+                        db.inTransaction(tx -> {
+                            tx.visits().update(before);
+                            return null;
+                        });
+                    }
+                });
+                vm.reload();
+            }
+        });
+    }
+
+    private void deleteVisit(VisitLine line) {
+        stored(line).ifPresent(v -> {
+            Alert a = new Alert(Alert.AlertType.CONFIRMATION, "Delete the visit of " + line.date() + " with all its"
+                    + " trials? You can undo this until you close Shapetrail.", ButtonType.CANCEL, ButtonType.OK);
+            a.setHeaderText("Delete visit");
+            a.initOwner(root.getScene().getWindow());
+            if (a.showAndWait().orElse(ButtonType.CANCEL) != ButtonType.OK) {
+                return;
+            }
+            Path file = vm.loadedProperty().get().file();
+            try (Database db = Database.open(file)) {
+                db.inTransaction(tx -> tx.visits().delete(v.id()));
+            }
+            pushUndo("the deletion of the visit of " + line.date(), () -> {
+                try (Database db = Database.open(file)) {
+                    db.inTransaction(tx -> tx.visits().insert(v.withId(0)));
+                }
+            });
+            vm.reload();
+        });
+    }
+
+    private void pushUndo(String what, Runnable action) {
+        undo.push(action);
+        person.undo.setText("Undo " + what);
+        person.undo.setDisable(false);
+    }
+
+    private void undoLast() {
+        Runnable r = undo.poll();
+        if (r != null) {
+            r.run();
+            vm.reload();
+        }
+        person.undo.setText("Undo last change");
+        person.undo.setDisable(undo.isEmpty());
     }
 
     public Parent root() {
         return root;
+    }
+
+    public WorkbenchViewModel viewModel() {
+        return vm;
+    }
+
+    public PersonPane personPane() {
+        return person;
+    }
+
+    public TabPane pages() {
+        return pages;
+    }
+
+    public ComboBox<String> squadChoice() {
+        return squadChoice;
     }
 }

@@ -13,13 +13,21 @@ public final class Charts {
 
     /** A person's migration path: every rated visit, noise ellipses, steps styled by verdict. */
     public static ChartModel migration(PersonHistory h, boolean ellipses, java.util.Locale locale) {
+        return migration(h, ellipses, locale, true);
+    }
+
+    /** As above; {@code legend} false leaves the key out (the screen draws it beside the chart). */
+    public static ChartModel migration(PersonHistory h, boolean ellipses, java.util.Locale locale, boolean legend) {
         List<SomatochartBuilder.PathPoint> pts = new ArrayList<>();
         for (VisitResult r : h.rated()) {
             pts.add(new SomatochartBuilder.PathPoint(r.visit().measuredAt().toLocalDate(), r.somatotype().rating(),
                     r.covariance(), "visit:" + r.visit().id()));
         }
         List<Verdict> verdicts = h.changes().stream().map(c -> c.verdict().verdict()).toList();
-        return new SomatochartBuilder(h.person().displayName(), locale)
-                .path(h.person().displayName(), pts, verdicts, ellipses).buildAroundData(7);
+        SomatochartBuilder b = new SomatochartBuilder(h.person().displayName(), locale);
+        if (!legend) {
+            b.withoutLegend();
+        }
+        return b.path(h.person().displayName(), pts, verdicts, ellipses).buildAroundData(7);
     }
 }

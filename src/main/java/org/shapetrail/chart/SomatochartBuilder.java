@@ -39,6 +39,7 @@ public final class SomatochartBuilder {
     private final Locale locale;
     private LabelPlacer labels;
     private int series;
+    private boolean legend = true;
 
     /** One visit on a migration path. */
     public record PathPoint(LocalDate date, Rating rating, ComponentCovariance covariance, String id) {
@@ -128,6 +129,12 @@ public final class SomatochartBuilder {
                     Palette.MUTED));
         }
         frame.add(new Primitive.Text(new Point(0, 0.35), "4-4-4", 7, Anchor.MIDDLE, false, Palette.MUTED));
+    }
+
+    /** Leaves the key out of the model (the screen shows it beside the chart, at a fixed size). */
+    public SomatochartBuilder withoutLegend() {
+        legend = false;
+        return this;
     }
 
     /** The key to the step styles, in the top left corner of the box (unitsPerPt: Y units per point). */
@@ -292,7 +299,7 @@ public final class SomatochartBuilder {
         for (LabelPlacer.Placed p : labels.placed()) {
             all.add(p.text());
         }
-        if (under.stream().anyMatch(p -> p instanceof Primitive.Segment seg && seg.arrow())) {
+        if (legend && under.stream().anyMatch(p -> p instanceof Primitive.Segment seg && seg.arrow())) {
             legend(all, minX, maxY, (maxY - minY) / 520);
         }
         return new ChartModel(title, minX, maxX, minY, maxY, X_SCALE, all);

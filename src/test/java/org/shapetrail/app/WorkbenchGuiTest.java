@@ -1,31 +1,233 @@
 package org.shapetrail.app;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.Locale;
+import java.util.concurrent.TimeUnit;
+import javafx.embed.swing.SwingFXUtils;
+import javafx.scene.Node;
 import javafx.scene.control.Label;
+import javafx.scene.control.TableView;
+import javafx.scene.control.TextField;
+import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+import org.shapetrail.docs.Screenshots;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.demo.DemoAcademy;
 
+/** The workbench as a person uses it, headless (TestFX with Monocle), on a fresh copy of the demo file. */
 @Tag("gui")
 @ExtendWith(ApplicationExtension.class)
 class WorkbenchGuiTest {
+    static Path demo;
+    Path file;
+    Workbench workbench;
+    Stage stage;
+
+    @BeforeAll
+    static void makeDemo() throws Exception {
+        demo = Files.createTempDirectory("gui").resolve("demo.sqlite");
+        DemoAcademy.generate(demo);
+    }
+
     @Start
     void start(Stage stage) throws Exception {
-        new ShapetrailApp().start(stage);
+        this.stage = stage;
+        file = Files.createTempDirectory("gui-test").resolve("academy.sqlite");
+        Files.copy(demo, file, StandardCopyOption.REPLACE_EXISTING);
+        workbench = ShapetrailApp.show(stage, file, new DirectTaskRunner(), Locale.UK, false);
+    }
+
+    static void snapshot(Node n, String name) throws Exception {
+        var img = WaitForAsyncUtils.asyncFx(() -> n.snapshot(null, null)).get(10, TimeUnit.SECONDS);
+        ImageIO.write(SwingFXUtils.fromFXImage(img, null), "png", Screenshots.folder().resolve(name).toFile());
+    }
+
+    @SuppressWarnings("unchecked")
+    static TableView<PersonRow> people(FxRobot r) {
+        return r.lookup("#people").queryAs(TableView.class);
+    }
+
+    void select(FxRobot robot, String name) {
+        robot.interact(() -> {
+            TableView<PersonRow> t = people(robot);
+            t.getItems().stream().filter(p -> p.name().equals(name)).findFirst()
+                    .ifPresent(p -> t.getSelectionModel().select(p));
+        });
+        WaitForAsyncUtils.waitForFxEvents();
     }
 
     @Test
-    void windowShowsTheTitleAndTheStandingCaution(FxRobot robot) {
-        Label title = robot.lookup("#app-title").queryAs(Label.class);
-        assertEquals("Shapetrail", title.getText());
-        assertTrue(title.isVisible());
-        Label caution = robot.lookup("#caution").queryAs(Label.class);
-        assertTrue(caution.getText().startsWith("The somatotype describes present body shape."));
+    void opensTheDemoAcademyWithEveryoneListedAndTheCaution(FxRobot robot) throws Exception {
+        assertEquals("Shapetrail", robot.lookup("#app-title").queryAs(Label.class).getText());
+        assertEquals(60, people(robot).getItems().size());
+        assertTrue(robot.lookup("#caution").queryAs(Label.class).getText()
+                .startsWith("The somatotype describes present body shape."));
+        select(robot, "Freya Breakwater");
+        Label latest = robot.lookup("#latest-change").queryAs(Label.class);
+        assertTrue(latest.getText().contains("beyond noise"), latest.getText());
+        snapshot(stage.getScene().getRoot(), "workbench-person.png");
+    }
+
+    @Test
+    void typingInTheSearchFieldFiltersThePeople(FxRobot robot) {
+        robot.clickOn("#search").write("zoe");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(1, people(robot).getItems().size());
+        assertEquals("Zoë Greyling", people(robot).getItems().get(0).name());
+    }
+
+    @Test
+    void aCompleteVisitEnteredByKeyboardAloneIsSavedShownAndStored(FxRobot robot) throws Exception {
+        select(robot, "Freya Breakwater");
+        int before = robot.lookup("#visits").queryAs(TableView.class).getItems().size();
+        VisitEntryView[] entry = new VisitEntryView[1];
+        robot.interact(() -> {
+            entry[0] = workbench.entryFor(null);
+            entry[0].show();
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        String[][] values = {{"61.2", "61.2"}, {"168.4", "168.6"}, {"88.1", "88.3"}, {"10.2", "10.4"},
+            {"8.8", "9.0"}, {"7.4", "7.6"}, {"9.0", "9.2"}, {"29.9", "30.0"}, {"34.6", "34.6"}, {"6.5", "6.5"},
+            {"9.1", "9.1"}};
+        robot.clickOn("#body_mass-1");
+        for (String[] pair : values) {
+            robot.write(pair[0]).type(KeyCode.ENTER).write(pair[1]).type(KeyCode.ENTER);
+        }
+        WaitForAsyncUtils.waitForFxEvents();
+        Label live = robot.lookup("#live-rating").queryAs(Label.class);
+        assertTrue(live.getText().startsWith("Somatotype "), live.getText());
+        snapshot(robot.lookup("#visit-entry").query(), "visit-entry.png");
+        robot.press(KeyCode.CONTROL).type(KeyCode.S).release(KeyCode.CONTROL);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(entry[0].saved().isPresent(), "saved");
+        // shown without waiting here, so the test reloads as the workbench does after showAndWait
+        robot.interact(() -> workbench.viewModel().reload());
+        WaitForAsyncUtils.waitForFxEvents();
+        select(robot, "Freya Breakwater");
+        assertEquals(before + 1, robot.lookup("#visits").queryAs(TableView.class).getItems().size());
+        try (Database db = Database.open(file)) {
+            assertTrue(db.inTransaction(tx -> tx.visits().find(entry[0].saved().get().id())).isPresent());
+        }
+    }
+
+    @Test
+    void aSkinfoldPairSixPercentApartBringsUpTheThirdTrialAndSaveIsRefused(FxRobot robot) throws Exception {
+        select(robot, "Freya Breakwater");
+        VisitEntryView[] entry = new VisitEntryView[1];
+        robot.interact(() -> {
+            entry[0] = workbench.entryFor(null);
+            entry[0].show();
+        });
+        TextField third = robot.lookup("#triceps-3").queryAs(TextField.class);
+        assertFalse(third.isVisible());
+        robot.clickOn("#triceps-1").write("10.0").type(KeyCode.ENTER).write("10.6").type(KeyCode.ENTER);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(third.isVisible(), "third-trial field shown for 5.8 %");
+        assertTrue(third.isFocused(), "Enter after trial 2 goes to the third trial when it is needed");
+        assertTrue(robot.lookup("#save-visit").query().isDisabled());
+        robot.press(KeyCode.CONTROL).type(KeyCode.S).release(KeyCode.CONTROL);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(entry[0].saved().isEmpty());
+        robot.interact(() -> entry[0].show().close());
+    }
+
+    @Test
+    void aStatureTypedInMetresIsFlaggedWithTheUnitHint(FxRobot robot) {
+        select(robot, "Freya Breakwater");
+        robot.interact(() -> workbench.entryFor(null).show());
+        robot.clickOn("#stature-1").write("1.68").type(KeyCode.ENTER);
+        WaitForAsyncUtils.waitForFxEvents();
+        Label msg = robot.lookup("#stature-message").queryAs(Label.class);
+        assertEquals("Trial 1: Stature 1.68 looks like metres; enter 168.0 cm. Stature needs a second trial.",
+                msg.getText());
+        assertTrue(robot.lookup("#save-visit").query().isDisabled());
+    }
+
+    @Test
+    void theSquadPageShowsTheMeanAndSam(FxRobot robot) throws Exception {
+        robot.interact(() -> {
+            workbench.pages().getSelectionModel().select(1);
+            workbench.squadChoice().setValue("Senior squad");
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        Label summary = robot.lookup("#squad-summary").queryAs(Label.class);
+        assertTrue(summary.getText().contains("Mean somatotype "), summary.getText());
+        assertTrue(summary.getText().contains("SAM "), summary.getText());
+        snapshot(stage.getScene().getRoot(), "workbench-squad.png");
+        robot.interact(() -> workbench.pages().getSelectionModel().select(2));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(robot.lookup("#tem-table").queryAs(TableView.class).getItems().size() >= 20);
+        snapshot(stage.getScene().getRoot(), "workbench-measurers.png");
+    }
+
+    @Test
+    void hoveringAPointShowsItsTooltipAndClickingSelectsTheVisit(FxRobot robot) {
+        select(robot, "Freya Breakwater");
+        var chart = workbench.personPane().chart();
+        var marker = chart.model().markers().get(chart.model().markers().size() - 1);
+        double[] at = chart.devicePosition(marker);
+        var screen = chart.localToScreen(at[0], at[1]);
+        robot.moveTo(screen);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(chart.tooltipText().startsWith("Freya Breakwater"), chart.tooltipText());
+        robot.clickOn(screen);
+        WaitForAsyncUtils.waitForFxEvents();
+        VisitLine selected = (VisitLine) workbench.personPane().visitsTable().getSelectionModel().getSelectedItem();
+        assertEquals(marker.id(), "visit:" + selected.visitId());
+    }
+
+    @Test
+    void anotherFileCanBeOpened(FxRobot robot) throws Exception {
+        Path empty = Files.createTempDirectory("other").resolve("other.sqlite");
+        try (Database db = Database.open(empty)) {
+            db.inTransaction(tx -> tx.people().insert(org.shapetrail.store.Person.draft("Wilhelmina Sandpiper",
+                    org.shapetrail.measure.Sex.FEMALE, java.time.LocalDate.of(2012, 5, 5))));
+        }
+        robot.interact(() -> workbench.viewModel().open(empty));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(1, people(robot).getItems().size());
+        assertEquals("Wilhelmina Sandpiper", people(robot).getItems().get(0).name());
+    }
+
+    @Test
+    void longWorkRunsOffTheFxThreadAndCanBeCancelled(FxRobot robot) throws Exception {
+        FxTaskRunner runner = new FxTaskRunner();
+        boolean[] stopped = {false};
+        robot.interact(() -> runner.run("Long job", p -> {
+            while (!p.isCancelled()) {
+                try {
+                    Thread.sleep(10);
+                } catch (InterruptedException e) {
+                    break; // cancel(true) interrupts the sleep
+                }
+            }
+            stopped[0] = true;
+            return null;
+        }, v -> { }, t -> { }));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(runner.busyProperty().get());
+        // the window still answers while the job runs
+        robot.clickOn("#search").write("arlo");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(1, people(robot).getItems().size());
+        robot.interact(runner::cancelCurrent);
+        WaitForAsyncUtils.waitFor(5, TimeUnit.SECONDS, () -> !runner.busyProperty().get());
+        assertFalse(runner.busyProperty().get());
+        WaitForAsyncUtils.waitFor(5, TimeUnit.SECONDS, () -> stopped[0]);
     }
 }

@@ -1,0 +1,30 @@
+package org.shapetrail.app;
+
+/** Age bands of the people filter, by age at the latest visit. */
+public enum AgeBand {
+    ALL("All ages", 0, 200),
+    UNDER_12("Under 12", 0, 12),
+    FROM_12_TO_13("12–13", 12, 14),
+    FROM_14_TO_15("14–15", 14, 16),
+    FROM_16_TO_17("16–17", 16, 18),
+    ADULT("18 and over", 18, 200);
+
+    private final String label;
+    private final double from;
+    private final double below;
+
+    AgeBand(String label, double from, double below) {
+        this.label = label;
+        this.from = from;
+        this.below = below;
+    }
+
+    public boolean contains(double age) {
+        return this == ALL || (age >= from && age < below);
+    }
+
+    @Override
+    public String toString() {
+        return label;
+    }
+}

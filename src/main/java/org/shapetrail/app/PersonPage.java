@@ -1,0 +1,72 @@
+package org.shapetrail.app;
+
+import java.time.format.DateTimeFormatter;
+import java.time.format.FormatStyle;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.shapetrail.chart.ChartModel;
+import org.shapetrail.chart.Charts;
+import org.shapetrail.growth.GrowthAlert;
+import org.shapetrail.growth.MaturityEstimate;
+import org.shapetrail.history.GrowthSummary;
+import org.shapetrail.history.PersonHistory;
+import org.shapetrail.history.VisitResult;
+import org.shapetrail.measure.Site;
+import org.shapetrail.noise.ChangeVerdict;
+
+/**
+ * What the person page shows, computed from a history: profile lines with their cautions, the visit
+ * table, the verdict of the latest change in words, and the chart. Plain values, so it is testable
+ * without the toolkit.
+ */
+public record PersonPage(String title, List<String> profile, String latestChange, List<VisitLine> visits,
+                         ChartModel chart) {
+    public static PersonPage of(PersonHistory h, String squad, Locale locale) {
+        DateTimeFormatter dates = DateTimeFormatter.ofLocalizedDate(FormatStyle.MEDIUM).withLocale(locale);
+        List<String> profile = new ArrayList<>();
+        var p = h.person();
+        String age = h.latest().map(v -> Numbers.fmt(locale, v.ageYears(), 1) + " years").orElse("no visits yet");
+        profile.add(String.join(" · ", List.of(age, p.sex() == org.shapetrail.measure.Sex.FEMALE ? "female" : "male",
+                squad.isEmpty() ? "no current squad" : squad, "born " + p.birthDate().format(dates))));
+        GrowthSummary g = h.growth();
+        g.velocity().ifPresent(v -> profile.add("Stature velocity " + Numbers.fmt(locale, v.perYear(), 1) + " ± "
+                + Numbers.fmt(locale, v.sePerYear(), 1) + " cm/year over " + Numbers.fmt(locale, v.intervalYears(), 2)
+                + " years" + (g.rapidGrowth() ? " — RAPID GROWTH. " + GrowthAlert.CAUTION : "")));
+        MaturityEstimate m = g.maturity();
+        if (m != null) {
+            profile.add("Maturity: " + m.summary() + ". " + MaturityEstimate.CAUTION);
+        }
+        profile.add("Observed growth spurt: " + g.observedPhv().describe());
+        if (g.midParentTargetCm() != null) {
+            profile.add("Mid-parent target height " + Numbers.fmt(locale, g.midParentTargetCm(), 1) + " cm; "
+                    + Numbers.fmt(locale, g.percentOfTarget(), 1) + " % reached (Tanner et al. 1970; a guide only)");
+        }
+        if (!p.consent().photographs()) {
+            profile.add("Photographs: off (no consent recorded)");
+        }
+        String latest = h.latestChange().map(c -> "Since " + c.from().visit().measuredAt().toLocalDate().format(dates)
+                + ": " + words(c.verdict(), locale)).orElse("No change to judge yet: fewer than two rated visits.");
+        List<VisitLine> lines = new ArrayList<>();
+        for (VisitResult r : h.visits()) {
+            var change = h.changeInto(r.visit().id());
+            lines.add(new VisitLine(r.visit().id(), r.visit().measuredAt().toLocalDate().format(dates),
+                    Numbers.fmt(locale, r.ageYears(), 1), r.measurer().name(), r.visit().context(),
+                    r.value(Site.STATURE).map(x -> Numbers.fmt(locale, x, 1)).orElse(""),
+                    r.value(Site.BODY_MASS).map(x -> Numbers.fmt(locale, x, 1)).orElse(""),
+                    r.rating().map(s -> s.rating().toDisplayString()).orElse("—"),
+                    r.rating().map(s -> s.category().displayName()).orElse(r.missing().isEmpty() ? ""
+                            : "not rated: " + r.missing().get(0).message()),
+                    change.map(c -> "SAD " + Numbers.fmt(locale, c.verdict().sad(), 2)).orElse(""),
+                    change.map(c -> c.verdict().verdict().words() + " (noise alone: "
+                            + Numbers.fmt(locale, c.verdict().sadNoise95(), 2) + ")").orElse("")));
+        }
+        return new PersonPage(p.displayName(), profile, latest, lines, Charts.migration(h, true, locale, false));
+    }
+
+    /** E.g. "beyond noise — SAD 1.09, where noise alone exceeds 0.27 in 5 % of pairs (Imogen Tarrant's own TEM)". */
+    public static String words(ChangeVerdict v, Locale locale) {
+        return v.verdict().words() + " — SAD " + Numbers.fmt(locale, v.sad(), 2) + ", where measurement noise alone"
+                + " exceeds " + Numbers.fmt(locale, v.sadNoise95(), 2) + " in 5 % of pairs (" + v.basis() + ")";
+    }
+}

@@ -1,0 +1,130 @@
+package org.shapetrail.app;
+
+import java.util.Locale;
+import java.util.function.Consumer;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.geometry.Insets;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.SplitPane;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableView;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+import org.shapetrail.chart.fx.ChartCanvas;
+import org.shapetrail.history.PersonHistory;
+
+/** The person page: profile with cautions, the verdict of the latest change, the visit table and the chart. */
+public final class PersonPane extends BorderPane {
+    private final Label title = new Label("Choose a person on the left");
+    private final VBox profile = new VBox(3);
+    private final Label latest = new Label();
+    private final TableView<VisitLine> visits = new TableView<>();
+    private final ChartCanvas chart = new ChartCanvas();
+    final Button newVisit = new Button("New visit…");
+    final Button editVisit = new Button("Edit visit…");
+    final Button deleteVisit = new Button("Delete visit…");
+    final Button undo = new Button("Undo last change");
+
+    public PersonPane() {
+        setId("person-page");
+        title.setId("person-title");
+        title.getStyleClass().add("page-title");
+        latest.setId("latest-change");
+        latest.setWrapText(true);
+        latest.getStyleClass().add("verdict-line");
+        visits.setId("visits");
+        chart.setId("person-chart");
+        newVisit.setId("new-visit");
+        editVisit.setId("edit-visit");
+        deleteVisit.setId("delete-visit");
+        undo.setId("undo");
+        column("Date", VisitLine::date, 100);
+        column("Age", VisitLine::age, 50);
+        column("Measurer", VisitLine::measurer, 120);
+        column("Context", VisitLine::context, 110);
+        column("Stature cm", VisitLine::stature, 80);
+        column("Mass kg", VisitLine::mass, 70);
+        column("Somatotype", VisitLine::rating, 100);
+        column("Category", VisitLine::category, 150);
+        column("Change", VisitLine::change, 80);
+        column("Verdict", VisitLine::verdict, 200);
+        visits.setPlaceholder(new Label("No visits yet"));
+        editVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
+        deleteVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
+        HBox actions = new HBox(8, newVisit, editVisit, deleteVisit, undo);
+        VBox head = new VBox(6, title, profile, latest, actions);
+        head.setPadding(new Insets(10, 12, 8, 12));
+        setTop(head);
+        Label key = new Label("━━ change beyond noise    ╺ ╸╺ borderline    ┈┈┈ within noise    ◯ shaded: 95 %"
+                + " measurement-noise region (first and latest visit)    ● latest visit");
+        key.setId("chart-key");
+        key.setWrapText(true);
+        key.getStyleClass().add("hint");
+        BorderPane chartBox = new BorderPane(chart);
+        chartBox.setBottom(key);
+        SplitPane split = new SplitPane(visits, chartBox);
+        split.setDividerPositions(0.5);
+        setCenter(split);
+        chart.setMinSize(320, 320);
+        VBox.setVgrow(split, Priority.ALWAYS);
+        chart.setOnSelect(id -> {
+            long visitId = Long.parseLong(id.substring("visit:".length()));
+            visits.getItems().stream().filter(v -> v.visitId() == visitId).findFirst().ifPresent(v -> {
+                visits.getSelectionModel().select(v);
+                visits.scrollTo(v);
+            });
+        });
+    }
+
+    private void column(String name, java.util.function.Function<VisitLine, String> f, double width) {
+        TableColumn<VisitLine, String> c = new TableColumn<>(name);
+        c.setCellValueFactory(d -> new SimpleStringProperty(f.apply(d.getValue())));
+        c.setPrefWidth(width);
+        visits.getColumns().add(c);
+    }
+
+    /** Shows a person's history. */
+    public void show(PersonHistory h, String squad, Locale locale) {
+        PersonPage page = PersonPage.of(h, squad, locale);
+        title.setText(page.title());
+        profile.getChildren().clear();
+        for (String line : page.profile()) {
+            Label l = new Label(line);
+            l.setWrapText(true);
+            l.getStyleClass().add(line.contains("RAPID GROWTH") ? "alert-line" : "profile-line");
+            profile.getChildren().add(l);
+        }
+        latest.setText(page.latestChange());
+        latest.getStyleClass().removeAll("beyond", "borderline", "within");
+        h.latestChange().ifPresent(c -> latest.getStyleClass().add(switch (c.verdict().verdict()) {
+            case BEYOND_NOISE -> "beyond";
+            case BORDERLINE -> "borderline";
+            case WITHIN_NOISE -> "within";
+        }));
+        visits.getItems().setAll(page.visits());
+        chart.setModel(page.chart());
+    }
+
+    public TableView<VisitLine> visitsTable() {
+        return visits;
+    }
+
+    public ChartCanvas chart() {
+        return chart;
+    }
+
+    void onNewVisit(Runnable r) {
+        newVisit.setOnAction(e -> r.run());
+    }
+
+    void onEditVisit(Consumer<VisitLine> c) {
+        editVisit.setOnAction(e -> c.accept(visits.getSelectionModel().getSelectedItem()));
+    }
+
+    void onDeleteVisit(Consumer<VisitLine> c) {
+        deleteVisit.setOnAction(e -> c.accept(visits.getSelectionModel().getSelectedItem()));
+    }
+}

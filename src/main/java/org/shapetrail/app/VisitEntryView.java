@@ -1,0 +1,225 @@
+package org.shapetrail.app;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import javafx.geometry.Insets;
+import javafx.scene.Scene;
+import javafx.scene.control.Button;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.DatePicker;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListView;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.TextField;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyCodeCombination;
+import javafx.scene.input.KeyCombination;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.ColumnConstraints;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.VBox;
+import javafx.stage.Modality;
+import javafx.stage.Stage;
+import javafx.stage.Window;
+import javafx.util.StringConverter;
+import org.controlsfx.control.decoration.Decorator;
+import org.controlsfx.control.decoration.StyleClassDecoration;
+import org.shapetrail.store.Measurer;
+import org.shapetrail.store.RatingMethod;
+import org.shapetrail.store.Visit;
+
+/**
+ * The visit entry window. Keyboard only: type a value and press Enter (or Tab) to go to the next trial;
+ * the third-trial field appears only where the ISAK rule asks for it; Ctrl+S saves, Escape closes.
+ */
+public final class VisitEntryView {
+    private final VisitEntryViewModel vm;
+    private final Stage stage = new Stage();
+    private final List<TextField> order = new ArrayList<>();
+    private Visit saved;
+
+    public VisitEntryView(VisitEntryViewModel vm, Window owner) {
+        this.vm = vm;
+        stage.initOwner(owner);
+        stage.initModality(Modality.WINDOW_MODAL);
+        stage.setTitle((vm.isEdit() ? "Edit visit — " : "New visit — ") + vm.person().displayName());
+
+        DatePicker date = new DatePicker();
+        date.setId("visit-date");
+        date.valueProperty().bindBidirectional(vm.dateProperty());
+        ComboBox<Measurer> measurer = new ComboBox<>(vm.measurers());
+        measurer.setId("visit-measurer");
+        measurer.valueProperty().bindBidirectional(vm.measurerProperty());
+        measurer.setConverter(new StringConverter<>() {
+            @Override
+            public String toString(Measurer m) {
+                return m == null ? "" : m.name() + (m.accreditation().isEmpty() ? "" : " (" + m.accreditation() + ")");
+            }
+
+            @Override
+            public Measurer fromString(String s) {
+                return null;
+            }
+        });
+        TextField context = new TextField();
+        context.setId("visit-context");
+        context.setPromptText("e.g. pre-season");
+        context.textProperty().bindBidirectional(vm.contextProperty());
+        HBox head = new HBox(8, new Label("Date"), date, new Label("Measured by"), measurer, new Label("Context"),
+                context);
+
+        GridPane grid = new GridPane();
+        grid.setHgap(8);
+        grid.setVgap(4);
+        grid.getColumnConstraints().addAll(new ColumnConstraints(210), new ColumnConstraints(80),
+                new ColumnConstraints(80), new ColumnConstraints(80), new ColumnConstraints(360));
+        grid.addRow(0, header("Site"), header("Trial 1"), header("Trial 2"), header("Trial 3"), header(""));
+        int row = 1;
+        for (VisitEntryViewModel.SiteFields f : vm.fields()) {
+            Label name = new Label(f.site().label() + " (" + f.site().unit().symbol() + ")");
+            TextField t1 = trialField(f.site().code() + "-1", f.first());
+            TextField t2 = trialField(f.site().code() + "-2", f.second());
+            TextField t3 = trialField(f.site().code() + "-3", f.third());
+            t3.visibleProperty().bind(f.thirdWanted());
+            t3.managedProperty().bind(f.thirdWanted());
+            Label msg = new Label();
+            msg.setId(f.site().code() + "-message");
+            msg.setWrapText(true);
+            msg.getStyleClass().add("field-message");
+            msg.textProperty().bind(f.message());
+            f.message().addListener((o, a, b) -> decorate(List.of(t1, t2, t3), b));
+            order.add(t1);
+            order.add(t2);
+            order.add(t3);
+            grid.addRow(row++, name, t1, t2, t3, msg);
+        }
+        for (TextField t : order) {
+            t.setOnAction(e -> next(t));
+        }
+
+        TextField endo = small("rater-endo", vm.raterEndoProperty());
+        TextField meso = small("rater-meso", vm.raterMesoProperty());
+        TextField ecto = small("rater-ecto", vm.raterEctoProperty());
+        TextField rater = new TextField();
+        rater.setId("rater-name");
+        rater.setPromptText("rater");
+        rater.textProperty().bindBidirectional(vm.raterNameProperty());
+        ComboBox<RatingMethod> method = new ComboBox<>();
+        method.getItems().setAll(RatingMethod.values());
+        method.valueProperty().bindBidirectional(vm.raterMethodProperty());
+        Label raterCmp = new Label();
+        raterCmp.setId("rater-comparison");
+        raterCmp.textProperty().bind(vm.raterComparisonProperty());
+        HBox raterBox = new HBox(6, new Label("Rater's rating (optional)"), endo, meso, ecto, rater, method, raterCmp);
+
+        Label live = new Label();
+        live.setId("live-rating");
+        live.getStyleClass().add("live-rating");
+        live.textProperty().bind(vm.liveRatingProperty());
+        Label verdict = new Label();
+        verdict.setId("live-verdict");
+        verdict.setWrapText(true);
+        verdict.textProperty().bind(vm.liveVerdictProperty());
+        ListView<String> problems = new ListView<>(vm.problems());
+        problems.setId("visit-problems");
+        problems.setPrefHeight(90);
+        problems.setFocusTraversable(false);
+
+        Button save = new Button("Save visit");
+        save.setId("save-visit");
+        save.setDefaultButton(false);
+        save.disableProperty().bind(vm.canSaveProperty().not());
+        save.setOnAction(e -> save());
+        Button cancel = new Button("Close without saving");
+        cancel.setOnAction(e -> stage.close());
+        Label hint = new Label("Enter moves to the next trial · Ctrl+S saves · Esc closes");
+        hint.getStyleClass().add("hint");
+        HBox buttons = new HBox(8, save, cancel, hint);
+
+        VBox body = new VBox(10, head, grid, raterBox, live, verdict, new Label("To put right before saving:"),
+                problems, buttons);
+        body.setPadding(new Insets(12));
+        BorderPane root = new BorderPane(new ScrollPane(body));
+        root.setId("visit-entry");
+        Scene scene = new Scene(root, 980, 760);
+        scene.getStylesheets().addAll(owner == null ? List.of() : owner.getScene().getStylesheets());
+        scene.getAccelerators().put(new KeyCodeCombination(KeyCode.S, KeyCombination.SHORTCUT_DOWN), this::save);
+        scene.getAccelerators().put(new KeyCodeCombination(KeyCode.ESCAPE), stage::close);
+        stage.setScene(scene);
+        stage.setOnShown(e -> order.get(0).requestFocus());
+    }
+
+    private static Label header(String s) {
+        Label l = new Label(s);
+        l.getStyleClass().add("grid-header");
+        return l;
+    }
+
+    private static TextField small(String id, javafx.beans.property.StringProperty p) {
+        TextField t = new TextField();
+        t.setId(id);
+        t.setPrefColumnCount(3);
+        t.textProperty().bindBidirectional(p);
+        return t;
+    }
+
+    private static TextField trialField(String id, javafx.beans.property.StringProperty p) {
+        TextField t = new TextField();
+        t.setId(id);
+        t.setPrefColumnCount(5);
+        t.textProperty().bindBidirectional(p);
+        return t;
+    }
+
+    private static void decorate(List<TextField> fields, String message) {
+        for (TextField t : fields) {
+            Decorator.removeAllDecorations(t);
+            t.getStyleClass().remove("invalid");
+            if (message != null && !message.isBlank() && !t.getText().isBlank()) {
+                t.getStyleClass().add("invalid");
+                if (t.getScene() != null) {
+                    Decorator.addDecoration(t, new StyleClassDecoration("decorated-invalid"));
+                }
+            }
+        }
+    }
+
+    /** Moves to the next visible trial field after {@code t}; after the last one, to Save. */
+    private void next(TextField t) {
+        int i = order.indexOf(t);
+        for (int j = i + 1; j < order.size(); j++) {
+            if (order.get(j).isVisible()) {
+                order.get(j).requestFocus();
+                return;
+            }
+        }
+        stage.getScene().lookup("#save-visit").requestFocus();
+    }
+
+    private void save() {
+        Optional<Visit> v = vm.save();
+        if (v.isPresent()) {
+            saved = v.get();
+            stage.close();
+        }
+    }
+
+    /** Shows the window and waits; the saved visit, or empty when closed without saving. */
+    public Optional<Visit> showAndWait() {
+        stage.showAndWait();
+        return Optional.ofNullable(saved);
+    }
+
+    /** Shows the window without waiting (tests). */
+    public Stage show() {
+        stage.show();
+        stage.requestFocus();
+        return stage;
+    }
+
+    public Optional<Visit> saved() {
+        return Optional.ofNullable(saved);
+    }
+}

@@ -1,0 +1,405 @@
+package org.shapetrail.app;
+
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.time.LocalDateTime;
+import java.time.LocalTime;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyBooleanWrapper;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import org.shapetrail.history.HistoryBuilder;
+import org.shapetrail.history.PersonHistory;
+import org.shapetrail.history.VisitResult;
+import org.shapetrail.measure.DecimalStyle;
+import org.shapetrail.measure.Problem;
+import org.shapetrail.measure.ProblemKind;
+import org.shapetrail.measure.Site;
+import org.shapetrail.measure.SiteTrials;
+import org.shapetrail.measure.ValueParser;
+import org.shapetrail.measure.VisitCheck;
+import org.shapetrail.measure.VisitEvaluation;
+import org.shapetrail.somatotype.Distances;
+import org.shapetrail.somatotype.Rating;
+import org.shapetrail.somatotype.SomatotypeRater;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.InvalidVisitException;
+import org.shapetrail.store.Measurer;
+import org.shapetrail.store.Person;
+import org.shapetrail.store.RatingMethod;
+import org.shapetrail.store.Visit;
+import org.shapetrail.store.VisitRating;
+
+/**
+ * The visit entry form: sites in measurement order with trials 1 and 2, a third trial only where the
+ * ISAK rule asks for it, every problem collected as you type, the live somatotype and the verdict against
+ * the previous visit; Save only when nothing is wrong, and then the visit is written whole.
+ */
+public final class VisitEntryViewModel {
+    /** The sites of the form, in the order they are measured. */
+    public static final List<Site> SITES = List.of(Site.BODY_MASS, Site.STATURE, Site.SITTING_HEIGHT, Site.TRICEPS,
+            Site.SUBSCAPULAR, Site.SUPRASPINALE, Site.MEDIAL_CALF, Site.ARM_FLEXED, Site.CALF, Site.HUMERUS, Site.FEMUR);
+
+    /** The text fields of one site and what the form says about it. */
+    public static final class SiteFields {
+        final Site site;
+        final StringProperty first = new SimpleStringProperty("");
+        final StringProperty second = new SimpleStringProperty("");
+        final StringProperty third = new SimpleStringProperty("");
+        final ReadOnlyBooleanWrapper thirdWanted = new ReadOnlyBooleanWrapper(false);
+        final StringProperty message = new SimpleStringProperty("");
+
+        SiteFields(Site site) {
+            this.site = site;
+        }
+
+        public Site site() {
+            return site;
+        }
+
+        public StringProperty first() {
+            return first;
+        }
+
+        public StringProperty second() {
+            return second;
+        }
+
+        public StringProperty third() {
+            return third;
+        }
+
+        /** True when the first two trials differ by more than the tolerance (or a third was typed). */
+        public javafx.beans.property.ReadOnlyBooleanProperty thirdWanted() {
+            return thirdWanted.getReadOnlyProperty();
+        }
+
+        public StringProperty message() {
+            return message;
+        }
+    }
+
+    private final Person person;
+    private final Path file;
+    private final HistoryBuilder builder;
+    private final PersonHistory history;
+    private final Locale locale;
+    private final Visit editing;
+    private final List<SiteFields> fields = new ArrayList<>();
+    private final ObjectProperty<LocalDate> date = new SimpleObjectProperty<>(LocalDate.now());
+    private final ObjectProperty<Measurer> measurer = new SimpleObjectProperty<>();
+    private final StringProperty context = new SimpleStringProperty("");
+    private final StringProperty raterEndo = new SimpleStringProperty("");
+    private final StringProperty raterMeso = new SimpleStringProperty("");
+    private final StringProperty raterEcto = new SimpleStringProperty("");
+    private final StringProperty raterName = new SimpleStringProperty("");
+    private final ObjectProperty<RatingMethod> raterMethod = new SimpleObjectProperty<>(RatingMethod.IN_PERSON);
+    private final StringProperty liveRating = new SimpleStringProperty("");
+    private final StringProperty liveVerdict = new SimpleStringProperty("");
+    private final StringProperty raterComparison = new SimpleStringProperty("");
+    private final ObservableList<String> problems = FXCollections.observableArrayList();
+    private final BooleanProperty canSave = new SimpleBooleanProperty(false);
+    private final ObservableList<Measurer> measurers = FXCollections.observableArrayList();
+
+    /**
+     * @param editing the visit being edited, or null for a new one
+     */
+    public VisitEntryViewModel(Path file, HistoryBuilder builder, PersonHistory history, Locale locale, Visit editing) {
+        this.person = history.person();
+        this.file = file;
+        this.builder = builder;
+        this.history = history;
+        this.locale = locale;
+        this.editing = editing;
+        measurers.setAll(builder.academy().measurers());
+        if (!measurers.isEmpty()) {
+            measurer.set(measurers.get(0));
+        }
+        for (Site s : SITES) {
+            SiteFields f = new SiteFields(s);
+            fields.add(f);
+            f.first.addListener(o -> evaluate());
+            f.second.addListener(o -> evaluate());
+            f.third.addListener(o -> evaluate());
+        }
+        date.addListener(o -> evaluate());
+        measurer.addListener(o -> evaluate());
+        for (StringProperty p : List.of(raterEndo, raterMeso, raterEcto, raterName)) {
+            p.addListener(o -> evaluate());
+        }
+        if (editing != null) {
+            date.set(editing.measuredAt().toLocalDate());
+            context.set(editing.context());
+            builder.academy().measurers().stream().filter(m -> m.id() == editing.measurerId()).findFirst()
+                    .ifPresent(measurer::set);
+            for (SiteTrials t : editing.trials()) {
+                field(t.site()).ifPresent(f -> {
+                    List<StringProperty> ps = List.of(f.first, f.second, f.third);
+                    for (int i = 0; i < t.values().size(); i++) {
+                        ps.get(i).set(Numbers.trial(locale, t.values().get(i)));
+                    }
+                });
+            }
+        }
+        evaluate();
+    }
+
+    public Optional<SiteFields> field(Site s) {
+        return fields.stream().filter(f -> f.site == s).findFirst();
+    }
+
+    /** Re-checks the whole form; called on every change. */
+    void evaluate() {
+        DecimalStyle style = DecimalStyle.of(locale);
+        List<Problem> found = new ArrayList<>();
+        List<SiteTrials> trials = new ArrayList<>();
+        for (SiteFields f : fields) {
+            f.message.set("");
+            List<String> texts = new ArrayList<>();
+            for (StringProperty p : List.of(f.first, f.second, f.third)) {
+                texts.add(p.get() == null ? "" : p.get().strip());
+            }
+            boolean any = texts.stream().anyMatch(t -> !t.isEmpty());
+            if (!any) {
+                f.thirdWanted.set(false);
+                continue;
+            }
+            List<Double> values = new ArrayList<>();
+            boolean ok = true;
+            for (int i = 0; i < 3; i++) {
+                if (texts.get(i).isEmpty()) {
+                    continue;
+                }
+                ValueParser.Parsed p = ValueParser.parse(f.site, texts.get(i), style);
+                if (p.ok()) {
+                    values.add(p.value());
+                } else {
+                    ok = false;
+                    found.add(new Problem(f.site, p.problem().kind(), "Trial " + (i + 1) + ": " + p.problem().message()));
+                }
+            }
+            if (ok && texts.get(1).isEmpty()) {
+                for (int i = 0; i < values.size(); i++) {
+                    int trial = i + 1;
+                    org.shapetrail.measure.MeasurementCheck.check(f.site, values.get(i)).ifPresent(p -> found.add(
+                            new Problem(f.site, p.kind(), "Trial " + trial + ": " + p.message())));
+                }
+                found.add(new Problem(f.site, ProblemKind.MISSING, f.site.label() + " needs a second trial."));
+                ok = false;
+            }
+            if (ok) {
+                trials.add(new SiteTrials(f.site, values));
+            }
+        }
+        VisitEvaluation ev = VisitCheck.evaluate(trials);
+        found.addAll(ev.problems());
+        for (SiteFields f : fields) {
+            boolean needs = ev.thirdTrialNeeded().contains(f.site) || !f.third.get().isBlank();
+            f.thirdWanted.set(needs);
+            String msg = String.join(" ", found.stream().filter(p -> p.site() == f.site).map(Problem::message).toList());
+            f.message.set(msg);
+        }
+        if (trials.isEmpty() && found.isEmpty()) {
+            found.add(new Problem(null, ProblemKind.MISSING, "Enter at least one site."));
+        }
+        if (measurer.get() == null) {
+            found.add(new Problem(null, ProblemKind.MISSING, "Choose who measured."));
+        }
+        if (date.get() == null) {
+            found.add(new Problem(null, ProblemKind.MISSING, "Enter the date of the visit."));
+        } else if (date.get().isBefore(person.birthDate())) {
+            found.add(new Problem(null, ProblemKind.INCONSISTENT, "The visit date is before " + person.displayName()
+                    + "'s date of birth."));
+        }
+        Rating rater = raterRating(found);
+        problems.setAll(found.stream().map(Problem::message).toList());
+        canSave.set(found.isEmpty());
+        live(trials, found, rater);
+    }
+
+    private Rating raterRating(List<Problem> found) {
+        List<String> t = List.of(raterEndo.get().strip(), raterMeso.get().strip(), raterEcto.get().strip());
+        if (t.stream().allMatch(String::isEmpty)) {
+            return null;
+        }
+        double[] v = new double[3];
+        String[] names = {"endomorphy", "mesomorphy", "ectomorphy"};
+        for (int i = 0; i < 3; i++) {
+            try {
+                v[i] = Double.parseDouble(t.get(i).replace(DecimalStyle.of(locale).separator(), '.'));
+                if (!(v[i] >= 0.5 && v[i] <= 12)) {
+                    throw new NumberFormatException();
+                }
+            } catch (NumberFormatException e) {
+                found.add(new Problem(null, ProblemKind.NOT_A_NUMBER, "Rater's " + names[i] + " \"" + t.get(i)
+                        + "\" must be a rating from 0.5 to 12, e.g. 3.5."));
+                return null;
+            }
+        }
+        if (raterName.get().isBlank()) {
+            found.add(new Problem(null, ProblemKind.MISSING, "Enter the rater's name with the rating."));
+        }
+        return Rating.of(v[0], v[1], v[2]);
+    }
+
+    private void live(List<SiteTrials> trials, List<Problem> found, Rating rater) {
+        SomatotypeRater.Outcome o = SomatotypeRater.rate(trials, builder.settings().endomorphy());
+        liveVerdict.set("");
+        raterComparison.set("");
+        if (!o.rated()) {
+            long missing = o.problems().stream().filter(p -> p.kind() == ProblemKind.MISSING).count();
+            liveRating.set(found.isEmpty() && missing > 0 ? "Somatotype: not yet (needs " + missing + " more site"
+                    + (missing == 1 ? "" : "s") + ")" : "Somatotype: not yet");
+            return;
+        }
+        Rating r = o.somatotype().rating();
+        liveRating.set("Somatotype " + r.toDisplayString() + " — " + o.somatotype().category().displayName());
+        if (rater != null) {
+            raterComparison.set("Rater's " + rater.toDisplayString() + " lies at SAD "
+                    + Numbers.fmt(locale, Distances.sad(r, rater), 2) + " from the anthropometric rating.");
+        }
+        if (measurer.get() == null || date.get() == null) {
+            return;
+        }
+        Visit draft = draft(trials);
+        VisitResult now = builder.result(person, draft);
+        history.rated().stream()
+                .filter(v -> v.visit().measuredAt().toLocalDate().isBefore(date.get()))
+                .filter(v -> editing == null || v.visit().id() != editing.id())
+                .reduce((a, b) -> b)
+                .ifPresent(prev -> liveVerdict.set("Against " + prev.visit().measuredAt().toLocalDate() + ": "
+                        + PersonPage.words(builder.verdict(prev, now), locale)));
+    }
+
+    private Visit draft(List<SiteTrials> trials) {
+        LocalTime time = editing != null ? editing.measuredAt().toLocalTime() : LocalTime.of(9, 0);
+        return new Visit(editing == null ? 0 : editing.id(), person.id(), LocalDateTime.of(date.get(), time),
+                measurer.get().id(), context.get(), editing == null ? "" : editing.notes(), trials);
+    }
+
+    /**
+     * Saves the visit whole, or refuses with every reason and writes nothing.
+     *
+     * @return the saved visit, or empty when refused (the reasons are in {@link #problems()})
+     */
+    public Optional<Visit> save() {
+        evaluate();
+        if (!canSave.get()) {
+            return Optional.empty();
+        }
+        List<SiteTrials> trials = new ArrayList<>();
+        for (SiteFields f : fields) {
+            List<Double> values = new ArrayList<>();
+            for (StringProperty p : List.of(f.first, f.second, f.third)) {
+                if (!p.get().isBlank()) {
+                    values.add(ValueParser.parse(f.site, p.get(), DecimalStyle.of(locale)).value());
+                }
+            }
+            if (!values.isEmpty()) {
+                trials.add(new SiteTrials(f.site, values));
+            }
+        }
+        Visit v = draft(trials);
+        Rating rater = raterRating(new ArrayList<>());
+        try (Database db = Database.open(file)) {
+            Visit saved = db.inTransaction(tx -> {
+                Visit s;
+                if (editing == null) {
+                    s = tx.visits().insert(v);
+                } else {
+                    tx.visits().update(v);
+                    s = v;
+                }
+                if (rater != null) {
+                    tx.visits().setRating(new VisitRating(s.id(), rater, raterName.get().strip(), raterMethod.get()));
+                }
+                return s;
+            });
+            return Optional.of(saved);
+        } catch (InvalidVisitException e) {
+            problems.setAll(e.problems().stream().map(Problem::message).toList());
+            canSave.set(false);
+            return Optional.empty();
+        } catch (RuntimeException e) {
+            problems.setAll(List.of(Errors.describe(e)));
+            return Optional.empty();
+        }
+    }
+
+    public List<SiteFields> fields() {
+        return fields;
+    }
+
+    public ObjectProperty<LocalDate> dateProperty() {
+        return date;
+    }
+
+    public ObjectProperty<Measurer> measurerProperty() {
+        return measurer;
+    }
+
+    public ObservableList<Measurer> measurers() {
+        return measurers;
+    }
+
+    public StringProperty contextProperty() {
+        return context;
+    }
+
+    public StringProperty raterEndoProperty() {
+        return raterEndo;
+    }
+
+    public StringProperty raterMesoProperty() {
+        return raterMeso;
+    }
+
+    public StringProperty raterEctoProperty() {
+        return raterEcto;
+    }
+
+    public StringProperty raterNameProperty() {
+        return raterName;
+    }
+
+    public ObjectProperty<RatingMethod> raterMethodProperty() {
+        return raterMethod;
+    }
+
+    public StringProperty liveRatingProperty() {
+        return liveRating;
+    }
+
+    public StringProperty liveVerdictProperty() {
+        return liveVerdict;
+    }
+
+    public StringProperty raterComparisonProperty() {
+        return raterComparison;
+    }
+
+    public ObservableList<String> problems() {
+        return problems;
+    }
+
+    public BooleanProperty canSaveProperty() {
+        return canSave;
+    }
+
+    public Person person() {
+        return person;
+    }
+
+    public boolean isEdit() {
+        return editing != null;
+    }
+}

@@ -1,0 +1,260 @@
+package org.shapetrail.app;
+
+import java.nio.file.Path;
+import java.text.Normalizer;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import org.shapetrail.growth.MaturityStatus;
+import org.shapetrail.history.Academy;
+import org.shapetrail.history.AnalysisSettings;
+import org.shapetrail.history.HistoryBuilder;
+import org.shapetrail.history.PersonHistory;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.Membership;
+import org.shapetrail.store.Person;
+import org.shapetrail.store.Squad;
+
+/**
+ * The workbench's state: the open file, the people list with its filters, and the selection. The only
+ * UI type (with the page view models) that reaches the store and the core.
+ */
+public final class WorkbenchViewModel {
+    /** The filter's choice of "every squad". */
+    public static final String ALL_SQUADS = "All squads";
+
+    private final TaskRunner runner;
+    private final ObjectProperty<Loaded> loaded = new SimpleObjectProperty<>();
+    private final ObservableList<PersonRow> allRows = FXCollections.observableArrayList();
+    private final ObservableList<PersonRow> rows = FXCollections.observableArrayList();
+    private final ObservableList<String> squads = FXCollections.observableArrayList(ALL_SQUADS);
+    private final StringProperty search = new SimpleStringProperty("");
+    private final StringProperty squad = new SimpleStringProperty(ALL_SQUADS);
+    private final ObjectProperty<AgeBand> ageBand = new SimpleObjectProperty<>(AgeBand.ALL);
+    private final ObjectProperty<MaturityStatus> maturity = new SimpleObjectProperty<>();
+    private final BooleanProperty rapidOnly = new SimpleBooleanProperty(false);
+    private final ObjectProperty<PersonRow> selected = new SimpleObjectProperty<>();
+    private final StringProperty status = new SimpleStringProperty("");
+    private final StringProperty error = new SimpleStringProperty("");
+    private AnalysisSettings settings = AnalysisSettings.standard();
+
+    public WorkbenchViewModel(TaskRunner runner) {
+        this.runner = runner;
+        search.addListener(o -> applyFilter());
+        squad.addListener(o -> applyFilter());
+        ageBand.addListener(o -> applyFilter());
+        maturity.addListener(o -> applyFilter());
+        rapidOnly.addListener(o -> applyFilter());
+    }
+
+    /** Opens a file in the background, replacing the current one when done. */
+    public void open(Path file) {
+        error.set("");
+        status.set("Opening " + file.getFileName() + " …");
+        AnalysisSettings s = settings;
+        runner.run("Opening " + file.getFileName(), progress -> load(file, s, progress), this::show, t -> {
+            status.set("");
+            error.set(Errors.describe(t));
+        });
+    }
+
+    /** Reads and computes a whole file (runs off the FX thread). */
+    static Loaded load(Path file, AnalysisSettings s, TaskRunner.Progress progress) throws InterruptedException {
+        Academy academy;
+        try (Database db = Database.open(file)) {
+            academy = Academy.load(db);
+        }
+        HistoryBuilder b = HistoryBuilder.of(academy, s);
+        Map<Long, PersonHistory> histories = new LinkedHashMap<>();
+        int n = academy.people().size();
+        int i = 0;
+        for (Person p : academy.people()) {
+            if (progress.isCancelled()) {
+                throw new InterruptedException("cancelled");
+            }
+            histories.put(p.id(), b.history(p));
+            progress.update(++i, n, "Computing " + i + " of " + n);
+        }
+        return new Loaded(file, b, histories);
+    }
+
+    /** Recomputes everything with new settings (cancellable). */
+    public void recompute(AnalysisSettings s) {
+        settings = s;
+        Loaded l = loaded.get();
+        if (l != null) {
+            runner.run("Recomputing", progress -> load(l.file(), s, progress), this::show, t -> {
+                status.set(t instanceof InterruptedException ? "Recomputing was cancelled; the earlier results stay."
+                        : "");
+                if (!(t instanceof InterruptedException)) {
+                    error.set(Errors.describe(t));
+                }
+            });
+        }
+    }
+
+    /** Reloads the open file (after a save), keeping the selection. */
+    public void reload() {
+        Loaded l = loaded.get();
+        if (l != null) {
+            open(l.file());
+        }
+    }
+
+    void show(Loaded l) {
+        Long keep = selected.get() == null ? null : selected.get().id();
+        loaded.set(l);
+        Academy a = l.builder().academy();
+        List<String> names = new ArrayList<>();
+        names.add(ALL_SQUADS);
+        a.squads().forEach(s -> names.add(s.name()));
+        squads.setAll(names);
+        if (!names.contains(squad.get())) {
+            squad.set(ALL_SQUADS);
+        }
+        List<PersonRow> list = new ArrayList<>();
+        for (Person p : a.people()) {
+            list.add(row(a, l.histories().get(p.id())));
+        }
+        allRows.setAll(list);
+        applyFilter();
+        status.set(l.file().getFileName() + ": " + a.people().size() + " people, " + a.visits().size() + " visits");
+        if (keep != null) {
+            rows.stream().filter(r -> r.id() == keep).findFirst().ifPresent(selected::set);
+        }
+    }
+
+    static PersonRow row(Academy a, PersonHistory h) {
+        Person p = h.person();
+        String squadName = currentSquad(a, p.id());
+        var last = h.latest();
+        var rated = h.rated();
+        var lastRated = rated.isEmpty() ? null : rated.get(rated.size() - 1);
+        var change = h.latestChange();
+        var g = h.growth();
+        return new PersonRow(p.id(), p.displayName(), squadName, last.map(v -> v.ageYears()).orElse(Double.NaN),
+                lastRated == null ? "" : lastRated.somatotype().rating().toDisplayString(),
+                lastRated == null ? "" : lastRated.somatotype().category().displayName(),
+                change.map(c -> c.verdict().sad()).orElse(Double.NaN), change.map(c -> c.verdict().verdict()).orElse(null),
+                g.velocity().map(v -> v.perYear()).orElse(Double.NaN), g.rapidGrowth(),
+                g.maturityEstimate().map(m -> m.status()).orElse(null));
+    }
+
+    /** The squad a person belongs to now (the latest membership), or "". */
+    static String currentSquad(Academy a, long personId) {
+        Optional<Membership> m = a.memberships().stream().filter(x -> x.personId() == personId)
+                .filter(x -> x.leftOn() == null || !x.leftOn().isBefore(LocalDate.now()))
+                .reduce((x, y) -> y.joinedOn().isAfter(x.joinedOn()) ? y : x);
+        return m.flatMap(x -> a.squad(x.squadId())).map(Squad::name).orElse("");
+    }
+
+    void applyFilter() {
+        String q = fold(search.get());
+        Loaded l = loaded.get();
+        List<Long> inSquad = null;
+        if (l != null && !ALL_SQUADS.equals(squad.get())) {
+            Academy a = l.builder().academy();
+            inSquad = a.squads().stream().filter(s -> s.name().equals(squad.get())).findFirst()
+                    .map(s -> a.membersOn(s.id(), LocalDate.now())).orElse(List.of());
+        }
+        List<PersonRow> out = new ArrayList<>();
+        for (PersonRow r : allRows) {
+            if (!q.isEmpty() && !fold(r.name()).contains(q)) {
+                continue;
+            }
+            if (inSquad != null && !inSquad.contains(r.id())) {
+                continue;
+            }
+            if (!ageBand.get().contains(r.age())) {
+                continue;
+            }
+            if (maturity.get() != null && r.maturity() != maturity.get()) {
+                continue;
+            }
+            if (rapidOnly.get() && !r.rapidGrowth()) {
+                continue;
+            }
+            out.add(r);
+        }
+        rows.setAll(out);
+    }
+
+    /** Lower case without accents, so "zoe" finds "Zoë". */
+    static String fold(String s) {
+        return Normalizer.normalize(s == null ? "" : s.strip(), Normalizer.Form.NFD).replaceAll("\\p{M}", "")
+                .toLowerCase(Locale.ROOT);
+    }
+
+    public Optional<PersonHistory> selectedHistory() {
+        Loaded l = loaded.get();
+        PersonRow r = selected.get();
+        if (l == null || r == null) {
+            return Optional.empty();
+        }
+        return Optional.ofNullable(l.histories().get(r.id()));
+    }
+
+    public ObjectProperty<Loaded> loadedProperty() {
+        return loaded;
+    }
+
+    public ObservableList<PersonRow> rows() {
+        return rows;
+    }
+
+    public ObservableList<String> squads() {
+        return squads;
+    }
+
+    public StringProperty searchProperty() {
+        return search;
+    }
+
+    public StringProperty squadProperty() {
+        return squad;
+    }
+
+    public ObjectProperty<AgeBand> ageBandProperty() {
+        return ageBand;
+    }
+
+    public ObjectProperty<MaturityStatus> maturityProperty() {
+        return maturity;
+    }
+
+    public BooleanProperty rapidOnlyProperty() {
+        return rapidOnly;
+    }
+
+    public ObjectProperty<PersonRow> selectedProperty() {
+        return selected;
+    }
+
+    public StringProperty statusProperty() {
+        return status;
+    }
+
+    public StringProperty errorProperty() {
+        return error;
+    }
+
+    public TaskRunner runner() {
+        return runner;
+    }
+
+    public AnalysisSettings settings() {
+        return settings;
+    }
+}

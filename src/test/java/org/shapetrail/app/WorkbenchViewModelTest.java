@@ -1,0 +1,64 @@
+package org.shapetrail.app;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.shapetrail.history.AnalysisSettings;
+import org.shapetrail.store.demo.DemoAcademy;
+
+class WorkbenchViewModelTest {
+    @TempDir
+    Path dir;
+
+    DirectTaskRunner runner = new DirectTaskRunner();
+    WorkbenchViewModel vm = new WorkbenchViewModel(runner);
+
+    @BeforeEach
+    void open() throws Exception {
+        Path f = dir.resolve("demo.sqlite");
+        DemoAcademy.generate(f);
+        vm.open(f);
+    }
+
+    @Test
+    void listsEveryoneAndFiltersAsYouType() {
+        assertEquals(60, vm.rows().size());
+        vm.searchProperty().set("zoe");
+        assertEquals(1, vm.rows().size());
+        assertEquals("Zoë Greyling", vm.rows().get(0).name());
+    }
+
+    @Test
+    void rapidGrowthFilterKeepsOnlyAlertedJuniors() {
+        vm.rapidOnlyProperty().set(true);
+        assertTrue(vm.rows().stream().allMatch(PersonRow::rapidGrowth));
+        assertTrue(vm.rows().size() >= 1);
+    }
+
+    @Test
+    void squadFilterKeepsItsCurrentMembers() {
+        vm.squadProperty().set("Senior squad");
+        // 20 seniors, one of whom left the squad on 2026-02-20 (demo database)
+        assertEquals(19, vm.rows().size());
+    }
+
+    @Test
+    void aCancelledRecomputationKeepsTheEarlierResults() {
+        var before = vm.loadedProperty().get();
+        runner.cancelAfterUpdates(5);
+        vm.recompute(AnalysisSettings.standard());
+        assertTrue(before == vm.loadedProperty().get(), "the earlier results are still shown");
+        assertEquals("Recomputing was cancelled; the earlier results stay.", vm.statusProperty().get());
+    }
+
+    @Test
+    void aMissingFileIsReportedNotThrown() {
+        vm.open(dir.resolve("no-such-folder").resolve("..").resolve("x").resolve("y.txt"));
+        // a new, empty file is created: opening never fails silently, and the list is empty
+        assertEquals(0, vm.rows().size());
+    }
+}
