@@ -7,7 +7,8 @@ import org.shapetrail.measure.Site;
 
 /**
  * The standard error of each final site value of a visit: the measurer's single-trial SD reduced by the
- * number of trials the value rests on, plus any biological variation.
+ * number of trials the value rests on, never below half the instrument's reading step, plus any
+ * biological variation.
  */
 public final class SiteUncertainty {
     /**
@@ -17,6 +18,14 @@ public final class SiteUncertainty {
     public static final double MEDIAN_OF_THREE_VARIANCE = 0.4487;
 
     private SiteUncertainty() {
+    }
+
+    /**
+     * The usual reading step of the instrument for each kind of site: skinfold calipers 0.2 mm, tape,
+     * anthropometer and stadiometer 0.1 cm, scales 0.1 kg (common practice).
+     */
+    public static double readingStep(org.shapetrail.measure.SiteKind kind) {
+        return kind == org.shapetrail.measure.SiteKind.SKINFOLD ? 0.2 : 0.1;
     }
 
     /** Factor on the single-trial SD for a value made by the repeat rule. */
@@ -40,6 +49,9 @@ public final class SiteUncertainty {
             }
             double v = o.value().getAsDouble();
             double measurement = profile.at(e.getKey()).singleTrialSd(v) * trialFactor(o.status());
+            // trials read from a scale share their rounding, so averaging cannot take the error of the value
+            // below half a reading step (a true 6.35 cm read as 6.3, 6.4, 6.3 gives 6.3)
+            measurement = Math.max(measurement, readingStep(e.getKey().kind()) / 2);
             double bio = biological.sd(e.getKey());
             out.put(e.getKey(), Math.sqrt(measurement * measurement + bio * bio));
         }

@@ -54,6 +54,20 @@ class ErrorProfileTest {
     }
 
     @Test
+    void aValueReadFromAScaleIsNeverMoreCertainThanHalfAReadingStep() {
+        // a measurer with a tiny breadth TEM (0.01 cm): two equal readings still leave half the 0.1 cm step
+        // of the anthropometer (common practice: breadths read to 0.1 cm)
+        java.util.Map<Site, SiteError> m = new java.util.EnumMap<>(Site.class);
+        for (Site s : Site.values()) {
+            m.put(s, new SiteError(s, 0.01, 0.1, 30, false));
+        }
+        ErrorProfile p = new ErrorProfile("Ada Quarrington", m);
+        RepeatOutcome humerus = RepeatRule.apply(SiteTrials.of(Site.HUMERUS, 6.3, 6.3));
+        assertEquals(0.05, SiteUncertainty.of(Map.of(Site.HUMERUS, humerus), p, BiologicalVariation.none())
+                .get(Site.HUMERUS), 1e-12);
+    }
+
+    @Test
     void biologicalVariationAddsInQuadrature() {
         ErrorProfile p = ErrorProfile.defaultsFor("Ada Quarrington", DefaultErrors.standard());
         RepeatOutcome mass = RepeatRule.apply(SiteTrials.of(Site.BODY_MASS, 60.0, 60.0));

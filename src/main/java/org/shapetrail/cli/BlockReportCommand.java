@@ -1,0 +1,110 @@
+package org.shapetrail.cli;
+
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.shapetrail.groups.BlockResult;
+import org.shapetrail.groups.ComponentTest;
+import org.shapetrail.history.Academy;
+import org.shapetrail.history.AnalysisSettings;
+import org.shapetrail.history.BlockReview;
+import org.shapetrail.history.HistoryBuilder;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.StoreException;
+import org.shapetrail.store.TrainingBlock;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code block-report}: did a training block change the squad's physique, and whose? */
+@Command(name = "block-report", mixinStandardHelpOptions = true,
+        description = "Report a training block: each athlete's change with its verdict, members left out and why,"
+                + " and the group statistics.")
+final class BlockReportCommand implements Callable<Integer> {
+    @Mixin
+    DbOption db;
+
+    @Option(names = "--block", paramLabel = "NAME", description = "the block's name (default: the latest block)")
+    String blockName;
+
+    @Option(names = "--window", paramLabel = "DAYS", defaultValue = "21",
+            description = "days around the block's first and last day to look for visits (default 21)")
+    int window;
+
+    @Option(names = "--format", description = "text (default) or csv", defaultValue = "text",
+            converter = FormatConverter.class)
+    OutputFormat format;
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        BlockReview r;
+        String squad;
+        try (Database d = db.open()) {
+            Academy a = Academy.load(d);
+            List<TrainingBlock> blocks = a.blocks();
+            if (blocks.isEmpty()) {
+                throw new StoreException("This file has no training blocks.");
+            }
+            TrainingBlock b = blockName == null ? blocks.get(blocks.size() - 1) : blocks.stream()
+                    .filter(x -> x.name().equalsIgnoreCase(blockName.strip())).findFirst()
+                    .orElseThrow(() -> new StoreException("There is no block called \"" + blockName + "\"; the blocks"
+                            + " are: " + String.join(", ", blocks.stream().map(TrainingBlock::name).toList())));
+            r = BlockReview.of(HistoryBuilder.of(a, AnalysisSettings.standard()), b, window);
+            squad = a.squad(b.squadId()).map(s -> s.name()).orElse("");
+        }
+        Table athletes = new Table("name", "before_date", "after_date", "before", "after", "sad", "sad_noise_95",
+                "meso_change", "verdict", "repeatability");
+        for (BlockReview.Athlete x : r.athletes()) {
+            athletes.row(x.person().displayName(), x.before().visit().measuredAt().toLocalDate(),
+                    x.after().visit().measuredAt().toLocalDate(), x.change().from().toDisplayString(),
+                    x.change().to().toDisplayString(), Table.num(x.change().sad(), 2),
+                    Table.num(x.change().sadNoise95(), 2), Table.num(x.change().change()[1], 2),
+                    x.change().verdict().words(), x.change().basis());
+        }
+        if (format == OutputFormat.TEXT) {
+            out.println(r.block().name() + " (" + squad + "), " + r.block().startsOn() + " to " + r.block().endsOn()
+                    + "; visits within " + window + " days of the start and the end");
+            out.println();
+        }
+        athletes.write(out, format);
+        out.println();
+        Table missing = new Table("left_out", "reason");
+        for (BlockReview.Missing m : r.missing()) {
+            missing.row(m.person().displayName(), m.reason());
+        }
+        missing.write(out, format);
+        BlockResult g = r.result();
+        if (g != null) {
+            out.println();
+            Table t = new Table("component", "mean_change", "t", "df", "p", "effect_size_dz", "effect_ci_low",
+                    "effect_ci_high");
+            for (ComponentTest c : g.components()) {
+                t.row(c.component().label(), Table.num(c.meanDifference(), 3), Table.num(c.t(), 2), Table.num(c.df(), 0),
+                        Table.num(c.pValue(), 4), Table.num(c.effectSize(), 2), Table.num(c.effectLow(), 2),
+                        Table.num(c.effectHigh(), 2));
+            }
+            t.write(out, format);
+            out.println();
+            Table s = new Table("measure", "value");
+            s.row("athletes with both visits", g.n());
+            s.row("mean before", g.before().meanRating().toDisplayString());
+            s.row("mean after", g.after().meanRating().toDisplayString());
+            s.row("SAM before", Table.num(g.before().sam(), 2));
+            s.row("SAM after", Table.num(g.after().sam(), 2));
+            s.row("SAD between the means", Table.num(g.sadBetweenMeans(), 2));
+            if (g.hotelling() != null) {
+                s.row("Hotelling T2 (one-sample, on the changes)", Table.num(g.hotelling().t2(), 2));
+                s.row("F (" + g.hotelling().df1() + ", " + g.hotelling().df2() + ")", Table.num(g.hotelling().f(), 2));
+                s.row("p", Table.num(g.hotelling().pValue(), 4));
+            }
+            s.row("athletes changed beyond noise", g.beyondNoise() + " of " + g.n());
+            s.write(out, format);
+        }
+        return 0;
+    }
+}
