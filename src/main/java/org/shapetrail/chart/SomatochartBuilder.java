@@ -245,7 +245,7 @@ public final class SomatochartBuilder {
 
     /** The whole chart. */
     public ChartModel build() {
-        return build(-8.6, 8.6, -14.0, 14.0);
+        return build(-8.6, 8.6, -14.0, 14.0, 520);
     }
 
     /**
@@ -253,6 +253,11 @@ public final class SomatochartBuilder {
      * tall, with the chart's proportions; the frame is drawn where it falls inside.
      */
     public ChartModel buildAroundData(double minSpanY) {
+        return buildAroundData(minSpanY, 520);
+    }
+
+    /** As {@link #buildAroundData(double)}, laid out (labels, key) for a chart {@code heightPt} tall. */
+    public ChartModel buildAroundData(double minSpanY, double heightPt) {
         double minX = Double.POSITIVE_INFINITY;
         double maxX = Double.NEGATIVE_INFINITY;
         double minY = Double.POSITIVE_INFINITY;
@@ -269,7 +274,7 @@ public final class SomatochartBuilder {
             }
         }
         if (pts.isEmpty()) {
-            return build();
+            return build(-8.6, 8.6, -14.0, 14.0, heightPt);
         }
         for (Point p : pts) {
             minX = Math.min(minX, p.x());
@@ -281,12 +286,11 @@ public final class SomatochartBuilder {
         double cy = (minY + maxY) / 2;
         double spanY = Math.max(minSpanY, Math.max(maxY - minY, (maxX - minX) * X_SCALE) * 1.35);
         double spanX = spanY / X_SCALE;
-        return build(cx - spanX / 2, cx + spanX / 2, cy - spanY / 2, cy + spanY / 2);
+        return build(cx - spanX / 2, cx + spanX / 2, cy - spanY / 2, cy + spanY / 2, heightPt);
     }
 
-    private ChartModel build(double minX, double maxX, double minY, double maxY) {
-        // labels are laid out for a chart about 520 pt tall at this crop
-        labels = new LabelPlacer(520 / (maxY - minY), X_SCALE);
+    private ChartModel build(double minX, double maxX, double minY, double maxY, double heightPt) {
+        labels = new LabelPlacer(heightPt / (maxY - minY), X_SCALE);
         for (Object[] r : reserved) {
             labels.reserve((Point) r[0], (Double) r[1]);
         }
@@ -300,7 +304,7 @@ public final class SomatochartBuilder {
             all.add(p.text());
         }
         if (legend && under.stream().anyMatch(p -> p instanceof Primitive.Segment seg && seg.arrow())) {
-            legend(all, minX, maxY, (maxY - minY) / 520);
+            legend(all, minX, maxY, (maxY - minY) / heightPt);
         }
         return new ChartModel(title, minX, maxX, minY, maxY, X_SCALE, all);
     }

@@ -1,0 +1,100 @@
+package org.shapetrail.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.shapetrail.history.Academy;
+import org.shapetrail.history.AnalysisSettings;
+import org.shapetrail.history.HistoryBuilder;
+import org.shapetrail.history.PersonHistory;
+import org.shapetrail.letters.LetterBatch;
+import org.shapetrail.letters.LetterComposer;
+import org.shapetrail.letters.LetterSettings;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.Squad;
+import org.shapetrail.store.StoreException;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code letters}: progress letters (PDF) for a person or a squad. */
+@Command(name = "letters", mixinStandardHelpOptions = true,
+        description = "Write progress letters (PDF) for a person or a squad: one file each and one combined file.")
+final class LettersCommand implements Callable<Integer> {
+    @Mixin
+    DbOption db;
+
+    static final class Who {
+        @Option(names = "--person", paramLabel = "ID")
+        Long person;
+
+        @Option(names = "--squad", paramLabel = "NAME", description = "the squad's current members")
+        String squad;
+    }
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    Who who;
+
+    @Option(names = "--from", required = true, paramLabel = "DATE", description = "first day of the period, yyyy-mm-dd")
+    LocalDate from;
+
+    @Option(names = "--to", required = true, paramLabel = "DATE", description = "last day of the period, yyyy-mm-dd")
+    LocalDate to;
+
+    @Option(names = "--out", required = true, paramLabel = "FOLDER")
+    Path out;
+
+    @Option(names = "--academy", defaultValue = "Saltmarsh Bay Sports Academy")
+    String academy;
+
+    @Option(names = "--sender", defaultValue = "the academy physiotherapist", description = "who signs")
+    String sender;
+
+    @Option(names = "--role", defaultValue = "", description = "the sender's role, shown after the name")
+    String role;
+
+    @Option(names = "--contact", defaultValue = "via the academy office")
+    String contact;
+
+    @Option(names = "--skinfolds-for-under-16", description = "also describe skinfold thickness for juniors under 16")
+    boolean skinfolds;
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintWriter o = spec.commandLine().getOut();
+        List<PersonHistory> people = new ArrayList<>();
+        HistoryBuilder b;
+        try (Database d = db.open()) {
+            Academy a = Academy.load(d);
+            b = HistoryBuilder.of(a, AnalysisSettings.standard());
+            if (who.person != null) {
+                people.add(b.history(a.person(who.person).orElseThrow(() -> new StoreException(
+                        "There is no person with id " + who.person + "."))));
+            } else {
+                Squad s = a.squads().stream().filter(q -> q.name().equalsIgnoreCase(who.squad.strip())).findFirst()
+                        .orElseThrow(() -> new StoreException("There is no squad called \"" + who.squad + "\"."));
+                for (long id : a.membersOn(s.id(), to)) {
+                    people.add(b.history(a.person(id).orElseThrow()));
+                }
+            }
+        }
+        LetterComposer c = new LetterComposer(b, new LetterSettings(academy, sender, role, contact, from, to, skinfolds),
+                Locale.UK);
+        var files = LetterBatch.write(c, people, out, (done, total) -> {
+            o.printf("\rLetters: %d of %d", done, total);
+            o.flush();
+        }, () -> false);
+        o.println();
+        o.println("Wrote " + (files.size() - 1) + " letter(s) and " + files.get(files.size() - 1) + ".");
+        return 0;
+    }
+}
