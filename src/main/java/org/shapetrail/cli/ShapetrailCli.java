@@ -8,7 +8,8 @@ import picocli.CommandLine.Command;
 @Command(name = "shapetrail", mixinStandardHelpOptions = true, version = "Shapetrail 0.1",
         description = "Somatotype, growth and measurement-noise tools for practitioners.",
         subcommands = {RateCommand.class, PeopleCommand.class, TemCommand.class, ChangesCommand.class,
-            GrowthCommand.class, BlockReportCommand.class, CompareSquadsCommand.class, LettersCommand.class, BackupCommand.class, RestoreCommand.class,
+            GrowthCommand.class, BlockReportCommand.class, CompareSquadsCommand.class, LettersCommand.class,
+            ImportCommand.class, ExportCommand.class, BackupCommand.class, RestoreCommand.class,
             ExportPersonCommand.class, ErasePersonCommand.class, CommandLine.HelpCommand.class})
 public final class ShapetrailCli implements Runnable {
     @CommandLine.Spec

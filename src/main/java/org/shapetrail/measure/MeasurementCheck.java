@@ -26,6 +26,9 @@ public final class MeasurementCheck {
      * @param value the value as entered, taken to be in the site's unit
      */
     public static Optional<Problem> check(Site site, double value) {
+        if (Double.isFinite(value) && value > 0 && site.isPlausible(value)) {
+            return Optional.empty(); // the common case, without building any message
+        }
         String name = site.label();
         String entered = Numbers.asEntered(value);
         String unit = site.unit().symbol();

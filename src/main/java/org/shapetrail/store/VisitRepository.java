@@ -24,7 +24,7 @@ import org.shapetrail.somatotype.Rating;
  */
 public final class VisitRepository {
     static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd'T'HH:mm:ss");
-    private static final int BATCH = 1000;
+    private static final int BATCH = 5000;
     private final Connection c;
 
     VisitRepository(Connection c) {

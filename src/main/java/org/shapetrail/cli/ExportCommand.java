@@ -1,0 +1,53 @@
+package org.shapetrail.cli;
+
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.concurrent.Callable;
+import org.shapetrail.exchange.Exporter;
+import org.shapetrail.history.Academy;
+import org.shapetrail.history.AnalysisSettings;
+import org.shapetrail.history.HistoryBuilder;
+import org.shapetrail.store.Database;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code export trials|visits|squads --out FILE}: CSV for spreadsheets and statistics software. */
+@Command(name = "export", mixinStandardHelpOptions = true,
+        description = "Export CSV: trials (every raw trial, re-importable), visits (a row per visit with trials,"
+                + " final values, somatotype, chart point, category and change verdict), squads (means and SAM).")
+final class ExportCommand implements Callable<Integer> {
+    enum What { trials, visits, squads }
+
+    @Mixin
+    DbOption db;
+
+    @Parameters(index = "0", paramLabel = "WHAT", description = "trials, visits or squads")
+    What what;
+
+    @Option(names = "--out", required = true, paramLabel = "FILE")
+    Path out;
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        int rows;
+        try (Database d = db.open(); Writer w = Files.newBufferedWriter(out, StandardCharsets.UTF_8)) {
+            Academy a = Academy.load(d);
+            rows = switch (what) {
+                case trials -> Exporter.trials(a, w);
+                case visits -> Exporter.visits(HistoryBuilder.of(a, AnalysisSettings.standard()), w);
+                case squads -> Exporter.squads(HistoryBuilder.of(a, AnalysisSettings.standard()), LocalDate.now(), w);
+            };
+        }
+        spec.commandLine().getOut().println("Wrote " + rows + " row(s) to " + out + ".");
+        return 0;
+    }
+}

@@ -1,0 +1,83 @@
+package org.shapetrail.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.shapetrail.exchange.ImportOptions;
+import org.shapetrail.exchange.ImportPlan;
+import org.shapetrail.exchange.Importer;
+import org.shapetrail.history.Academy;
+import org.shapetrail.measure.DecimalStyle;
+import org.shapetrail.store.Database;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code import FILE.csv}: a dry run by default; {@code --commit} writes, all or nothing. */
+@Command(name = "import", mixinStandardHelpOptions = true,
+        description = "Import visits from CSV (wide: a row per visit; long: a row per trial). A dry run reports every"
+                + " row; --commit writes everything in one transaction, and only when no row is rejected.")
+final class ImportCommand implements Callable<Integer> {
+    @Mixin
+    DbOption db;
+
+    @Parameters(index = "0", paramLabel = "FILE.csv")
+    Path file;
+
+    @Option(names = "--commit", description = "write the import (default: dry run only)")
+    boolean commit;
+
+    @Option(names = "--create-missing", description = "add people and measurers that are not in the file yet")
+    boolean createMissing;
+
+    @Option(names = "--decimal-comma", description = "numbers use a decimal comma (default: comma for ; files)")
+    boolean decimalComma;
+
+    @Option(names = "--decimal-point", description = "numbers use a decimal point")
+    boolean decimalPoint;
+
+    @Option(names = "--month-first", description = "read 03/04/2024 as 4 March (default: 3 April)")
+    boolean monthFirst;
+
+    @Option(names = "--show", defaultValue = "rejected", description = "rows to list: all, rejected (default), none")
+    String show;
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        DecimalStyle d = decimalComma ? DecimalStyle.COMMA : decimalPoint ? DecimalStyle.POINT : null;
+        ImportOptions o = new ImportOptions(d, monthFirst, createMissing);
+        try (Database database = db.open()) {
+            ImportPlan plan = Importer.dryRun(file, Academy.load(database), o);
+            if (!plan.fileProblems().isEmpty()) {
+                spec.commandLine().getErr().println(plan.summary());
+                return 2;
+            }
+            for (ImportPlan.RowReport r : plan.rows()) {
+                boolean list = show.equals("all") || (show.equals("rejected")
+                        && r.outcome() != ImportPlan.Outcome.IMPORTED);
+                if (list) {
+                    out.println("line " + r.line() + ": " + r.outcome().words() + (r.reason().isEmpty() ? ""
+                            : " — " + r.reason()));
+                }
+            }
+            out.println(plan.summary());
+            if (!commit) {
+                out.println("Dry run: nothing was written. Run again with --commit to import.");
+                return plan.canCommit() ? 0 : 1;
+            }
+            if (!plan.canCommit()) {
+                out.println("Nothing was written: fix the rejected rows and run again.");
+                return 1;
+            }
+            int n = Importer.commit(database, plan);
+            out.println("Imported " + n + " visit(s).");
+        }
+        return 0;
+    }
+}

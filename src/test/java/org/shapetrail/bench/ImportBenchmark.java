@@ -1,0 +1,63 @@
+package org.shapetrail.bench;
+
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.Locale;
+import org.shapetrail.exchange.ImportOptions;
+import org.shapetrail.exchange.ImportPlan;
+import org.shapetrail.exchange.Importer;
+import org.shapetrail.history.Academy;
+import org.shapetrail.store.Database;
+
+/**
+ * Harness for docs/performance.md: writes a long-layout CSV of 1,000,000 trial rows (50,000 visits of
+ * 10 sites × 2 trials), or times the import of the CSV named as the first argument: dry run (parse, match,
+ * check every value) and commit in one transaction into a fresh file. See bench/import-vs-sqlite3.sh.
+ */
+public final class ImportBenchmark {
+    private ImportBenchmark() {
+    }
+
+    static final String[][] SITES = {{"body_mass", "60.1"}, {"stature", "170.2"}, {"triceps", "10.2"},
+        {"subscapular", "9.0"}, {"supraspinale", "7.2"}, {"medial_calf", "8.2"}, {"arm_flexed", "30.1"},
+        {"calf", "35.1"}, {"humerus", "6.8"}, {"femur", "9.5"}};
+
+    public static void main(String[] args) throws Exception {
+        if (args.length == 2 && args[0].equals("--write")) {
+            write(Path.of(args[1]));
+            return;
+        }
+        Path csv = Path.of(args[0]);
+        Path db = Files.createTempDirectory("import-bench").resolve("bench.sqlite");
+        long t0 = System.nanoTime();
+        int visits;
+        try (Database d = Database.open(db)) {
+            ImportPlan plan = Importer.dryRun(csv, Academy.load(d), new ImportOptions(null, false, true));
+            if (!plan.canCommit()) {
+                throw new IllegalStateException(plan.summary());
+            }
+            long t1 = System.nanoTime();
+            visits = Importer.commit(d, plan);
+            System.out.printf(Locale.ROOT, "dry run %.2f s, commit %.2f s%n", (t1 - t0) / 1e9,
+                    (System.nanoTime() - t1) / 1e9);
+        }
+        System.out.printf(Locale.ROOT, "shapetrail import: %d visits in %.2f s%n", visits, (System.nanoTime() - t0) / 1e9);
+    }
+
+    static void write(Path csv) throws Exception {
+        try (Writer w = Files.newBufferedWriter(csv, StandardCharsets.UTF_8)) {
+            w.write("name,birth_date,sex,date,time,measurer,site,trial,value\n");
+            for (int v = 0; v < 50_000; v++) {
+                String head = "Athlete " + (v % 1000) + ",2005-01-01,M," + LocalDate.of(2010, 1, 1).plusDays(v / 1000)
+                        + ",09:00,Bench Measurer,";
+                for (String[] s : SITES) {
+                    w.write(head + s[0] + ",1," + s[1] + "\n");
+                    w.write(head + s[0] + ",2," + s[1] + "\n");
+                }
+            }
+        }
+    }
+}
