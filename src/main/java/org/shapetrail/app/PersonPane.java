@@ -23,6 +23,9 @@ public final class PersonPane extends BorderPane {
     private final Label latest = new Label();
     private final TableView<VisitLine> visits = new TableView<>();
     private final ChartCanvas chart = new ChartCanvas();
+    private final ChartCanvas growth = new ChartCanvas();
+    private final SomatotypeSpaceView space = new SomatotypeSpaceView();
+    private final javafx.scene.control.TabPane views = new javafx.scene.control.TabPane();
     final Button newVisit = new Button("New visit…");
     final Button editVisit = new Button("Edit visit…");
     final Button deleteVisit = new Button("Delete visit…");
@@ -65,7 +68,14 @@ public final class PersonPane extends BorderPane {
         key.getStyleClass().add("hint");
         BorderPane chartBox = new BorderPane(chart);
         chartBox.setBottom(key);
-        SplitPane split = new SplitPane(visits, chartBox);
+        growth.setId("growth-chart");
+        javafx.scene.control.Tab somato = new javafx.scene.control.Tab("Somatochart", chartBox);
+        javafx.scene.control.Tab growthTab = new javafx.scene.control.Tab("Growth", growth);
+        javafx.scene.control.Tab spaceTab = new javafx.scene.control.Tab("3D", space);
+        views.getTabs().addAll(somato, growthTab, spaceTab);
+        views.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
+        views.setId("person-views");
+        SplitPane split = new SplitPane(visits, views);
         split.setDividerPositions(0.5);
         setCenter(split);
         chart.setMinSize(320, 320);
@@ -106,6 +116,8 @@ public final class PersonPane extends BorderPane {
         }));
         visits.getItems().setAll(page.visits());
         chart.setModel(page.chart());
+        growth.setModel(org.shapetrail.chart.Charts.growth(h));
+        space.show(h.rated().stream().map(r -> r.somatotype().rating()).toList());
     }
 
     public TableView<VisitLine> visitsTable() {
@@ -114,6 +126,14 @@ public final class PersonPane extends BorderPane {
 
     public ChartCanvas chart() {
         return chart;
+    }
+
+    public javafx.scene.control.TabPane views() {
+        return views;
+    }
+
+    public SomatotypeSpaceView space() {
+        return space;
     }
 
     void onNewVisit(Runnable r) {

@@ -5,6 +5,7 @@ import java.time.LocalDate;
 import java.util.ArrayDeque;
 import java.util.Deque;
 import java.util.Locale;
+import java.util.List;
 import java.util.Optional;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.geometry.Insets;
@@ -63,6 +64,12 @@ public final class Workbench {
     private final VBox squadBlocks = new VBox(2);
     private final TableView<PersonRow> squadMembers;
     private final ChartCanvas squadChart = new ChartCanvas();
+    private final ComboBox<String> blockChoice = new ComboBox<>();
+    private final Label blockSummary = new Label();
+    private final javafx.scene.control.ListView<String> blockAthletes = new javafx.scene.control.ListView<>();
+    private final Label blockLeftOut = new Label();
+    private final ChartCanvas blockChart = new ChartCanvas();
+    private final ChartCanvas blockProfile = new ChartCanvas();
     private final TableView<NoiseModel.TemRow> tem = new TableView<>();
     private final ToggleButton dark = new ToggleButton("Dark theme");
     /** Earlier versions of visits changed in this session, newest first, for undo. */
@@ -186,12 +193,42 @@ public final class Workbench {
                 }));
         VBox head = new VBox(6, squadChoice, squadSummary, new Label("Training blocks"), squadBlocks);
         head.setPadding(new Insets(10, 12, 8, 12));
-        BorderPane p = new BorderPane();
-        p.setTop(head);
+        BorderPane members = new BorderPane();
+        members.setTop(head);
         SplitPane split = new SplitPane(squadMembers, squadChart);
         split.setDividerPositions(0.5);
-        p.setCenter(split);
-        return p;
+        members.setCenter(split);
+
+        blockChoice.setId("block-choice");
+        blockChoice.valueProperty().addListener((o, a, b) -> showBlock());
+        blockSummary.setId("block-summary");
+        blockSummary.setWrapText(true);
+        blockAthletes.setId("block-athletes");
+        blockLeftOut.setId("block-left-out");
+        blockLeftOut.setWrapText(true);
+        blockChart.setId("block-chart");
+        blockProfile.setId("block-profile");
+        blockChart.setMinSize(280, 280);
+        blockProfile.setMinSize(220, 160);
+        Label key = new Label("Arrows: each athlete before → after; ━━ beyond noise  ╺ ╸ borderline  ┈┈ within noise;"
+                + " ◆ group means (grey before, amber after) with their dispersion");
+        key.getStyleClass().add("hint");
+        key.setWrapText(true);
+        VBox blockHead = new VBox(6, blockChoice, blockSummary, blockLeftOut);
+        blockHead.setPadding(new Insets(10, 12, 8, 12));
+        SplitPane chartSplit = new SplitPane(blockChart, blockProfile);
+        chartSplit.setOrientation(javafx.geometry.Orientation.VERTICAL);
+        chartSplit.setDividerPositions(0.62);
+        BorderPane charts = new BorderPane(chartSplit);
+        charts.setBottom(key);
+        SplitPane blockSplit = new SplitPane(blockAthletes, charts);
+        blockSplit.setDividerPositions(0.42);
+        BorderPane blocks = new BorderPane(blockSplit);
+        blocks.setTop(blockHead);
+        TabPane inner = new TabPane(new Tab("Members", members), new Tab("Training blocks", blocks));
+        inner.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        inner.setId("squad-views");
+        return inner;
     }
 
     private Parent measurersPage() {
@@ -308,6 +345,32 @@ public final class Workbench {
             squadBlocks.getChildren().setAll(page.blocks().isEmpty() ? java.util.List.of(new Label("none"))
                     : page.blocks().stream().map(Label::new).toList());
             squadChart.setModel(page.chart());
+            List<String> names = l.builder().academy().blocks().stream().filter(b -> b.squadId() == s.id())
+                    .map(org.shapetrail.store.TrainingBlock::name).toList();
+            blockChoice.getItems().setAll(names);
+            blockChoice.setValue(names.isEmpty() ? null : names.get(names.size() - 1));
+            if (names.isEmpty()) {
+                blockSummary.setText("This squad has no training blocks.");
+                blockAthletes.getItems().clear();
+                blockLeftOut.setText("");
+            }
+        });
+    }
+
+    private void showBlock() {
+        Loaded l = vm.loadedProperty().get();
+        String name = blockChoice.getValue();
+        if (l == null || name == null) {
+            return;
+        }
+        l.builder().academy().blocks().stream().filter(b -> b.name().equals(name)).findFirst().ifPresent(b -> {
+            BlockPage page = BlockPage.of(org.shapetrail.history.BlockReview.of(l.builder(), b,
+                    org.shapetrail.history.BlockReview.DEFAULT_WINDOW_DAYS), locale);
+            blockSummary.setText(page.summary());
+            blockAthletes.getItems().setAll(page.athletes());
+            blockLeftOut.setText(page.leftOut().isEmpty() ? "" : "Left out: " + String.join("; ", page.leftOut()));
+            blockChart.setModel(page.chart());
+            blockProfile.setModel(page.profile());
         });
     }
 

@@ -11,6 +11,23 @@ public final class Charts {
     private Charts() {
     }
 
+    /** A person's stature and mass against age, with velocities, the observed curve and age at PHV. */
+    public static ChartModel growth(PersonHistory h) {
+        List<GrowthChartBuilder.Visit> vs = new ArrayList<>();
+        for (VisitResult r : h.visits()) {
+            vs.add(new GrowthChartBuilder.Visit(r.ageYears(), r.value(org.shapetrail.measure.Site.STATURE).orElse(null),
+                    r.value(org.shapetrail.measure.Site.BODY_MASS).orElse(null)));
+        }
+        GrowthChartBuilder b = new GrowthChartBuilder(h.person().displayName()).visits(vs);
+        var phv = h.growth().observedPhv();
+        if (phv.status() == org.shapetrail.growth.ObservedPhv.Status.FOUND) {
+            b.curve(phv.curve()).ageAtPhv(phv.ageAtPeak(), phv.seAgeAtPeak(), "observed PHV");
+        } else if (h.growth().maturity() != null) {
+            b.ageAtPhv(h.growth().maturity().ageAtPhv(), h.growth().maturity().seeYears(), "estimated age at PHV");
+        }
+        return b.build();
+    }
+
     /** A person's migration path: every rated visit, noise ellipses, steps styled by verdict. */
     public static ChartModel migration(PersonHistory h, boolean ellipses, java.util.Locale locale) {
         return migration(h, ellipses, locale, true);

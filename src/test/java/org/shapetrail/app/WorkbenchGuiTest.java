@@ -192,6 +192,46 @@ class WorkbenchGuiTest {
     }
 
     @Test
+    void theBlockViewSaysHowManyChangedAndWhoWasLeftOut(FxRobot robot) throws Exception {
+        robot.interact(() -> {
+            workbench.pages().getSelectionModel().select(1);
+            workbench.squadChoice().setValue("Senior squad");
+        });
+        robot.interact(() -> ((javafx.scene.control.TabPane) robot.lookup("#squad-views").query())
+                .getSelectionModel().select(1));
+        WaitForAsyncUtils.waitForFxEvents();
+        var l = workbench.viewModel().loadedProperty().get();
+        var review = org.shapetrail.history.BlockReview.of(l.builder(), l.builder().academy().blocks().get(0), 21);
+        Label summary = robot.lookup("#block-summary").queryAs(Label.class);
+        assertTrue(summary.getText().contains(review.result().beyondNoise() + " of " + review.result().n()
+                + " changed beyond measurement noise"), summary.getText());
+        assertTrue(robot.lookup("#block-left-out").queryAs(Label.class).getText().startsWith("Left out: "));
+        snapshot(stage.getScene().getRoot(), "workbench-block.png");
+    }
+
+    @Test
+    void theGrowthChartAndTheThreeDimensionalViewOrItsFallbackAreThere(FxRobot robot) throws Exception {
+        select(robot, "Zeb Thistlewood");
+        robot.interact(() -> workbench.personPane().views().getSelectionModel().select(1));
+        WaitForAsyncUtils.waitForFxEvents();
+        var growth = robot.lookup("#growth-chart").queryAs(org.shapetrail.chart.fx.ChartCanvas.class);
+        assertTrue(growth.model().markers().size() >= 8, "a point per visit");
+        snapshot(stage.getScene().getRoot(), "workbench-growth.png");
+        robot.interact(() -> workbench.personPane().views().getSelectionModel().select(2));
+        WaitForAsyncUtils.waitForFxEvents();
+        if (!javafx.application.Platform.isSupported(javafx.application.ConditionalFeature.SCENE3D)) {
+            // the software pipeline of headless tests has no 3D: the view says so in words
+            Label msg = robot.lookup("#space-unavailable").queryAs(Label.class);
+            assertTrue(msg.isVisible() && msg.getText().startsWith("The 3D view needs graphics hardware support"));
+        } else {
+            var space = workbench.personPane().space();
+            double before = space.orbit().yaw();
+            robot.drag(space).moveBy(60, 0).release(javafx.scene.input.MouseButton.PRIMARY);
+            assertTrue(space.orbit().yaw() != before, "dragging rotates the view");
+        }
+    }
+
+    @Test
     void anotherFileCanBeOpened(FxRobot robot) throws Exception {
         Path empty = Files.createTempDirectory("other").resolve("other.sqlite");
         try (Database db = Database.open(empty)) {

@@ -1,0 +1,93 @@
+package org.shapetrail.app;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.shapetrail.chart.ChartModel;
+import org.shapetrail.chart.MarkerShape;
+import org.shapetrail.chart.Palette;
+import org.shapetrail.chart.ProfileChartBuilder;
+import org.shapetrail.chart.SomatochartBuilder;
+import org.shapetrail.groups.BlockResult;
+import org.shapetrail.groups.ComponentTest;
+import org.shapetrail.history.BlockReview;
+import org.shapetrail.noise.Verdict;
+
+/**
+ * What the training-block view shows: the answer in words (did the block change the group, and for
+ * whom), each athlete's before→after arrow on the chart styled by verdict, the component profile before
+ * and after, the table of athletes and who was left out.
+ */
+public record BlockPage(String summary, List<String> athletes, List<String> leftOut, ChartModel chart,
+                        ChartModel profile) {
+    public static BlockPage of(BlockReview r, Locale locale) {
+        BlockResult g = r.result();
+        String summary;
+        if (g == null) {
+            summary = r.block().name() + ": fewer than two athletes have visits near both the start and the end.";
+        } else {
+            StringBuilder sb = new StringBuilder();
+            sb.append(r.block().name()).append(" (").append(r.block().startsOn()).append(" to ").append(r.block().endsOn())
+                    .append("): ").append(g.n()).append(" athletes with both visits. ");
+            sb.append(g.beyondNoise()).append(" of ").append(g.n()).append(" changed beyond measurement noise. ");
+            sb.append("Group mean ").append(g.before().meanRating().toDisplayString()).append(" → ")
+                    .append(g.after().meanRating().toDisplayString()).append(" (SAD ")
+                    .append(Numbers.fmt(locale, g.sadBetweenMeans(), 2)).append("). ");
+            if (g.hotelling() != null) {
+                sb.append("Three components together: Hotelling T² ").append(Numbers.fmt(locale, g.hotelling().t2(), 1))
+                        .append(", F(").append(g.hotelling().df1()).append(", ").append(g.hotelling().df2()).append(") = ")
+                        .append(Numbers.fmt(locale, g.hotelling().f(), 2)).append(", p = ")
+                        .append(Numbers.fmt(locale, g.hotelling().pValue(), 4)).append(g.hotelling().pValue() < 0.05
+                                ? " — the group's shape changed." : " — no clear change of the group as a whole.");
+            }
+            for (ComponentTest c : g.components()) {
+                sb.append(" ").append(c.component().label()).append(" ").append(Numbers.fmt(locale, c.meanDifference(), 2))
+                        .append(" (p ").append(Numbers.fmt(locale, c.pValue(), 3)).append(", dz ")
+                        .append(Numbers.fmt(locale, c.effectSize(), 2)).append(").");
+            }
+            summary = sb.toString();
+        }
+        List<String> athletes = new ArrayList<>();
+        SomatochartBuilder chart = new SomatochartBuilder(r.block().name(), locale).withoutLegend();
+        for (BlockReview.Athlete a : r.athletes()) {
+            athletes.add(a.person().displayName() + ": " + a.change().from().toDisplayString() + " → "
+                    + a.change().to().toDisplayString() + ", " + PersonPage.words(a.change(), locale));
+            String colour = a.change().verdict() == Verdict.BEYOND_NOISE ? Palette.series(0) : Palette.MUTED;
+            chart.arrow(a.change().from(), a.change().to(), a.change().verdict(), colour);
+            chart.point(a.change().to(), null, a.person().displayName() + "\n" + a.change().to().toDisplayString() + "\n"
+                    + a.change().verdict().words(), colour, MarkerShape.CIRCLE);
+        }
+        List<String> left = r.missing().stream().map(m -> m.person().displayName() + ": " + m.reason()).toList();
+        ChartModel profile = null;
+        if (g != null) {
+            chart.groupMean("before", g.before(), Palette.MUTED);
+            chart.groupMean("after", g.after(), Palette.ACCENT);
+            profile = new ProfileChartBuilder(r.block().name()).line("before", g.before().meanRating(), sds(r, true))
+                    .line("after", g.after().meanRating(), sds(r, false)).build();
+        }
+        return new BlockPage(summary, athletes, left, chart.buildAroundData(8), profile);
+    }
+
+    private static double[] sds(BlockReview r, boolean before) {
+        double[] sd = new double[3];
+        int n = r.athletes().size();
+        for (int j = 0; j < 3; j++) {
+            double m = 0;
+            for (BlockReview.Athlete a : r.athletes()) {
+                m += comp(before ? a.change().from() : a.change().to(), j);
+            }
+            m /= n;
+            double s = 0;
+            for (BlockReview.Athlete a : r.athletes()) {
+                double d = comp(before ? a.change().from() : a.change().to(), j) - m;
+                s += d * d;
+            }
+            sd[j] = n > 1 ? Math.sqrt(s / (n - 1)) : 0;
+        }
+        return sd;
+    }
+
+    private static double comp(org.shapetrail.somatotype.Rating r, int j) {
+        return j == 0 ? r.endomorphy() : j == 1 ? r.mesomorphy() : r.ectomorphy();
+    }
+}
