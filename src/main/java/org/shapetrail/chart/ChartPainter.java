@@ -63,6 +63,12 @@ public final class ChartPainter {
 
     private static void marker(DrawTarget t, double x, double y, Primitive.Marker m) {
         double r = m.sizePt() / 2;
+        if (m.shape() == MarkerShape.CIRCLE || m.shape() == MarkerShape.RING) {
+            Style s = m.shape() == MarkerShape.RING ? new Style(m.style().stroke(), m.style().strokeWidth() + 0.8,
+                    new double[0], null, 1) : m.style();
+            t.circle(x, y, r, s, m.id());
+            return;
+        }
         double[][] shape = switch (m.shape()) {
             case CIRCLE, RING -> regular(x, y, r, 20, 0);
             case SQUARE -> regular(x, y, r * 1.25, 4, Math.PI / 4);

@@ -18,5 +18,17 @@ public interface DrawTarget {
 
     void text(double x, double y, String text, double sizePt, Anchor anchor, boolean bold, String colour);
 
+    /** A round marker; targets that draw circles natively override this, the rest get a 20-sided polygon. */
+    default void circle(double x, double y, double r, Style style, String id) {
+        double[] xs = new double[20];
+        double[] ys = new double[20];
+        for (int i = 0; i < 20; i++) {
+            double a = 2 * Math.PI * i / 20;
+            xs[i] = x + r * Math.cos(a);
+            ys[i] = y + r * Math.sin(a);
+        }
+        polyline(xs, ys, true, style, "marker", id);
+    }
+
     void end();
 }

@@ -145,8 +145,18 @@ public final class ChartCanvas extends Pane {
                 zoom, panX, panY);
     }
 
+    /** A draw target on any canvas (for benchmarks and image export of what the screen shows). */
+    public static DrawTarget targetFor(Canvas c) {
+        return new FxTarget(c.getGraphicsContext2D());
+    }
+
     private static final class FxTarget implements DrawTarget {
+        private static final java.util.Map<String, Color> COLOURS = new java.util.concurrent.ConcurrentHashMap<>();
         private final GraphicsContext g;
+
+        private static Color web(String hex) {
+            return COLOURS.computeIfAbsent(hex, Color::web);
+        }
 
         FxTarget(GraphicsContext g) {
             this.g = g;
@@ -154,7 +164,9 @@ public final class ChartCanvas extends Pane {
 
         @Override
         public void begin(double width, double height, String background) {
-            g.setFill(Color.web(background));
+            // clearing the whole canvas also drops the commands of earlier drawings
+            g.clearRect(0, 0, g.getCanvas().getWidth(), g.getCanvas().getHeight());
+            g.setFill(web(background));
             g.fillRect(0, 0, width, height);
             g.setLineCap(StrokeLineCap.ROUND);
             g.setLineJoin(StrokeLineJoin.ROUND);
@@ -165,14 +177,14 @@ public final class ChartCanvas extends Pane {
             g.setGlobalAlpha(1);
             if (s.fill() != null) {
                 g.setGlobalAlpha(s.opacity());
-                g.setFill(Color.web(s.fill()));
+                g.setFill(web(s.fill()));
                 g.fillPolygon(xs, ys, xs.length);
                 g.setGlobalAlpha(Math.min(1, s.opacity() + 0.3));
             } else {
                 g.setGlobalAlpha(s.opacity());
             }
             if (s.stroke() != null && s.strokeWidth() > 0) {
-                g.setStroke(Color.web(s.stroke()));
+                g.setStroke(web(s.stroke()));
                 g.setLineWidth(s.strokeWidth());
                 g.setLineDashes(s.dash().length == 0 ? null : s.dash());
                 if (closed) {
@@ -188,13 +200,29 @@ public final class ChartCanvas extends Pane {
         @Override
         public void text(double x, double y, String text, double sizePt, Anchor anchor, boolean bold, String colour) {
             g.setFont(Font.font("System", bold ? FontWeight.BOLD : FontWeight.NORMAL, sizePt * 1.2));
-            g.setFill(Color.web(colour));
+            g.setFill(web(colour));
             g.setTextAlign(switch (anchor) {
                 case START -> TextAlignment.LEFT;
                 case MIDDLE -> TextAlignment.CENTER;
                 case END -> TextAlignment.RIGHT;
             });
             g.fillText(text, x, y);
+        }
+
+        @Override
+        public void circle(double x, double y, double r, Style s, String id) {
+            g.setGlobalAlpha(s.opacity());
+            if (s.fill() != null) {
+                g.setFill(web(s.fill()));
+                g.fillOval(x - r, y - r, 2 * r, 2 * r);
+            }
+            if (s.stroke() != null && s.strokeWidth() > 0) {
+                g.setStroke(web(s.stroke()));
+                g.setLineWidth(s.strokeWidth());
+                g.setLineDashes((double[]) null);
+                g.strokeOval(x - r, y - r, 2 * r, 2 * r);
+            }
+            g.setGlobalAlpha(1);
         }
 
         @Override
