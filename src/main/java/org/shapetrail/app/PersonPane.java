@@ -30,6 +30,7 @@ public final class PersonPane extends BorderPane {
     final Button editVisit = new Button("Edit visit…");
     final Button deleteVisit = new Button("Delete visit…");
     final Button undo = new Button("Undo last change");
+    final Button previewLetter = new Button("Preview letter…");
 
     public PersonPane() {
         setId("person-page");
@@ -44,6 +45,7 @@ public final class PersonPane extends BorderPane {
         editVisit.setId("edit-visit");
         deleteVisit.setId("delete-visit");
         undo.setId("undo");
+        previewLetter.setId("preview-letter");
         column("Date", VisitLine::date, 100);
         column("Age", VisitLine::age, 50);
         column("Measurer", VisitLine::measurer, 120);
@@ -57,7 +59,7 @@ public final class PersonPane extends BorderPane {
         visits.setPlaceholder(new Label("No visits yet"));
         editVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
         deleteVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
-        HBox actions = new HBox(8, newVisit, editVisit, deleteVisit, undo);
+        HBox actions = new HBox(8, newVisit, editVisit, deleteVisit, undo, previewLetter);
         VBox head = new VBox(6, title, profile, latest, actions);
         head.setPadding(new Insets(10, 12, 8, 12));
         setTop(head);

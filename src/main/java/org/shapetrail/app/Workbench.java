@@ -166,6 +166,9 @@ public final class Workbench {
         person.onEditVisit(line -> editVisit(line));
         person.onDeleteVisit(line -> deleteVisit(line));
         person.undo.setOnAction(e -> undoLast());
+        person.previewLetter.setOnAction(e -> previewLetter(new org.shapetrail.letters.LetterSettings(
+                "Saltmarsh Bay Sports Academy", "the academy physiotherapist", "", "via the academy office",
+                LocalDate.now().minusYears(1), LocalDate.now(), false)));
         person.undo.setDisable(true);
         personTab.setContent(person);
         squadTab.setContent(squadPage());
@@ -191,7 +194,11 @@ public final class Workbench {
                     vm.selectedProperty().set(r);
                     pages.getSelectionModel().select(personTab);
                 }));
-        VBox head = new VBox(6, squadChoice, squadSummary, new Label("Training blocks"), squadBlocks);
+        Button letters = new Button("Write letters for this squad…");
+        letters.setId("write-letters");
+        letters.setOnAction(e -> writeLetters());
+        VBox head = new VBox(6, new HBox(8, squadChoice, letters), squadSummary, new Label("Training blocks"),
+                squadBlocks);
         head.setPadding(new Insets(10, 12, 8, 12));
         BorderPane members = new BorderPane();
         members.setTop(head);
@@ -372,6 +379,63 @@ public final class Workbench {
             blockChart.setModel(page.chart());
             blockProfile.setModel(page.profile());
         });
+    }
+
+    /** Shows the pages of the selected person's letter for the period, as they will print. */
+    void previewLetter(org.shapetrail.letters.LetterSettings settings) {
+        Optional<PersonHistory> h = vm.selectedHistory();
+        if (h.isEmpty()) {
+            return;
+        }
+        Loaded l = vm.loadedProperty().get();
+        vm.runner().run("Preparing the letter", () -> org.shapetrail.letters.LetterPreview.pages(
+                new org.shapetrail.letters.LetterComposer(l.builder(), settings, locale).compose(h.get()), 80), pages -> {
+                    VBox box = new VBox(10);
+                    box.setId("letter-preview");
+                    for (var img : pages) {
+                        javafx.scene.image.ImageView v = new javafx.scene.image.ImageView(
+                                javafx.embed.swing.SwingFXUtils.toFXImage(img, null));
+                        v.setPreserveRatio(true);
+                        v.setFitWidth(640);
+                        box.getChildren().add(v);
+                    }
+                    javafx.stage.Stage s = new javafx.stage.Stage();
+                    s.initOwner(root.getScene().getWindow());
+                    s.setTitle("Letter preview — " + h.get().person().displayName());
+                    s.setScene(new javafx.scene.Scene(new javafx.scene.control.ScrollPane(box), 680, 820));
+                    s.show();
+                    lastPreview = s;
+                }, t -> vm.errorProperty().set(Errors.describe(t)));
+    }
+
+    javafx.stage.Stage lastPreview;
+
+    private void writeLetters() {
+        Loaded l = vm.loadedProperty().get();
+        String name = squadChoice.getValue();
+        if (l == null || name == null) {
+            return;
+        }
+        Optional<org.shapetrail.letters.LetterSettings> settings = LettersDialog.ask(root.getScene().getWindow(),
+                "Letters — " + name);
+        if (settings.isEmpty()) {
+            return;
+        }
+        javafx.stage.DirectoryChooser dc = new javafx.stage.DirectoryChooser();
+        dc.setTitle("Folder for the letters");
+        var folder = dc.showDialog(root.getScene().getWindow());
+        if (folder == null) {
+            return;
+        }
+        var academy = l.builder().academy();
+        var squad = academy.squads().stream().filter(s -> s.name().equals(name)).findFirst().orElseThrow();
+        List<PersonHistory> people = academy.membersOn(squad.id(), settings.get().to()).stream()
+                .map(id -> l.histories().get(id)).toList();
+        var composer = new org.shapetrail.letters.LetterComposer(l.builder(), settings.get(), locale);
+        vm.runner().run("Writing letters", progress -> org.shapetrail.letters.LetterBatch.write(composer, people,
+                folder.toPath(), (done, total) -> progress.update(done, total, "Letter " + done + " of " + total),
+                progress::isCancelled), files -> vm.statusProperty().set("Wrote " + Math.max(0, files.size() - 1)
+                + " letter(s) to " + folder), t -> vm.errorProperty().set(Errors.describe(t)));
     }
 
     private void chooseFile() {

@@ -232,6 +232,21 @@ class WorkbenchGuiTest {
     }
 
     @Test
+    void aLetterCanBePreviewedBeforeExport(FxRobot robot) throws Exception {
+        select(robot, "Zeb Thistlewood");
+        robot.clickOn("#preview-letter");
+        WaitForAsyncUtils.waitForFxEvents();
+        javafx.stage.Stage preview = workbench.lastPreview;
+        assertTrue(preview != null && preview.isShowing(), "preview window open");
+        var box = (javafx.scene.layout.VBox) preview.getScene().lookup("#letter-preview");
+        assertTrue(box.getChildren().size() >= 1 && box.getChildren().size() <= 2, "one or two pages");
+        var img = ((javafx.scene.image.ImageView) box.getChildren().get(0)).getImage();
+        // A4 at 80 dpi: 595 × 842 pt → 661 × 935 px (derived)
+        assertEquals(661, Math.round(img.getWidth()), 1);
+        robot.interact(preview::close);
+    }
+
+    @Test
     void anotherFileCanBeOpened(FxRobot robot) throws Exception {
         Path empty = Files.createTempDirectory("other").resolve("other.sqlite");
         try (Database db = Database.open(empty)) {
