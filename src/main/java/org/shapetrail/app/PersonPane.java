@@ -24,7 +24,8 @@ public final class PersonPane extends BorderPane {
     private final TableView<VisitLine> visits = new TableView<>();
     private final ChartCanvas chart = new ChartCanvas();
     private final ChartCanvas growth = new ChartCanvas();
-    private final SomatotypeSpaceView space = new SomatotypeSpaceView();
+    private SomatotypeSpaceView space;
+    private java.util.List<org.shapetrail.somatotype.Rating> spaceRatings = java.util.List.of();
     private final javafx.scene.control.TabPane views = new javafx.scene.control.TabPane();
     final Button newVisit = new Button("New visit…");
     final Button editVisit = new Button("Edit visit…");
@@ -73,7 +74,15 @@ public final class PersonPane extends BorderPane {
         growth.setId("growth-chart");
         javafx.scene.control.Tab somato = new javafx.scene.control.Tab("Somatochart", chartBox);
         javafx.scene.control.Tab growthTab = new javafx.scene.control.Tab("Growth", growth);
-        javafx.scene.control.Tab spaceTab = new javafx.scene.control.Tab("3D", space);
+        javafx.scene.control.Tab spaceTab = new javafx.scene.control.Tab("3D");
+        // the 3D scene is built when first shown: most sessions never open it, and it costs start-up time
+        spaceTab.selectedProperty().addListener((o, a, b) -> {
+            if (b && space == null) {
+                space = new SomatotypeSpaceView();
+                spaceTab.setContent(space);
+                space.show(spaceRatings);
+            }
+        });
         views.getTabs().addAll(somato, growthTab, spaceTab);
         views.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
         views.setId("person-views");
@@ -119,7 +128,10 @@ public final class PersonPane extends BorderPane {
         visits.getItems().setAll(page.visits());
         chart.setModel(page.chart());
         growth.setModel(org.shapetrail.chart.Charts.growth(h));
-        space.show(h.rated().stream().map(r -> r.somatotype().rating()).toList());
+        spaceRatings = h.rated().stream().map(r -> r.somatotype().rating()).toList();
+        if (space != null) {
+            space.show(spaceRatings);
+        }
     }
 
     public TableView<VisitLine> visitsTable() {

@@ -16,11 +16,49 @@ import org.shapetrail.store.DataFolder;
 /** The JavaFX application: builds the workbench window, remembers its size and the last file. */
 public final class ShapetrailApp extends Application {
     private static final Preferences PREFS = Preferences.userRoot().node("org/shapetrail/app");
+    /** The start file read while the toolkit starts (see {@link #preload}), or null. */
+    private static volatile java.util.concurrent.CompletableFuture<Loaded> preloaded;
+    private static volatile Path preloadedFile;
+
+    /**
+     * Starts reading and computing the start file on a background thread, so that the data is ready when
+     * the window is (the JavaFX toolkit takes about a second to start).
+     */
+    static void preload(Path file) {
+        preloadedFile = file;
+        preloaded = java.util.concurrent.CompletableFuture.supplyAsync(() -> {
+            try {
+                return WorkbenchViewModel.load(file, org.shapetrail.history.AnalysisSettings.standard(),
+                        new TaskRunner.Progress() {
+                            @Override
+                            public void update(double done, double total, String message) {
+                            }
+
+                            @Override
+                            public boolean isCancelled() {
+                                return false;
+                            }
+                        });
+            } catch (InterruptedException e) {
+                throw new java.util.concurrent.CompletionException(e);
+            }
+        });
+    }
 
     @Override
     public void start(Stage stage) {
+        if (Boolean.getBoolean("shapetrail.startupProbe")) {
+            System.out.println("toolkit started after " + java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime() + " ms");
+        }
         Path file = chooseStartFile(getParameters() == null ? List.of() : getParameters().getRaw());
         show(stage, file, new FxTaskRunner(), Locale.getDefault(Locale.Category.FORMAT), true);
+    }
+
+    static void probe(String what) {
+        if (Boolean.getBoolean("shapetrail.startupProbe")) {
+            System.out.println(what + " after " + java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime()
+                    + " ms");
+        }
     }
 
     /** The file named by {@code --db FILE}, else the last one opened, else the default (seeded with the demo). */
@@ -43,6 +81,7 @@ public final class ShapetrailApp extends Application {
     public static Workbench show(Stage stage, Path file, TaskRunner runner, Locale locale, boolean remember) {
         WorkbenchViewModel vm = new WorkbenchViewModel(runner);
         Workbench workbench = new Workbench(vm, locale);
+        probe("workbench built");
         Scene scene = new Scene(workbench.root(), remember ? PREFS.getDouble("width", 1360) : 1360,
                 remember ? PREFS.getDouble("height", 860) : 860);
         scene.getStylesheets().add(ShapetrailApp.class.getResource("shapetrail.css").toExternalForm());
@@ -69,8 +108,34 @@ public final class ShapetrailApp extends Application {
                 }
             });
         }
+        probe("scene ready");
         stage.show();
-        vm.open(file);
+        probe("stage shown");
+        if (Boolean.getBoolean("shapetrail.startupProbe")) {
+            // for bench/cold-start.sh: report when the people list is on screen, then quit
+            vm.loadedProperty().addListener((o, a, b) -> javafx.application.Platform.runLater(() -> {
+                long ms = System.currentTimeMillis()
+                        - java.lang.management.ManagementFactory.getRuntimeMXBean().getStartTime();
+                System.out.println("usable window with " + vm.rows().size() + " people after " + ms
+                        + " ms from JVM start");
+                javafx.application.Platform.exit();
+            }));
+        }
+        var pre = preloaded;
+        if (pre != null && file.equals(preloadedFile)) {
+            preloaded = null;
+            vm.statusProperty().set("Opening " + file.getFileName() + " …");
+            pre.whenComplete((l, t) -> javafx.application.Platform.runLater(() -> {
+                probe("preload done");
+                if (l != null) {
+                    vm.show(l);
+                } else {
+                    vm.open(file);
+                }
+            }));
+        } else {
+            vm.open(file);
+        }
         return workbench;
     }
 }

@@ -176,6 +176,13 @@ public final class Workbench {
         settingsTab.setContent(settingsPage());
         pages.getTabs().addAll(personTab, squadTab, measurersTab, settingsTab);
         pages.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        pages.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            if (b == squadTab) {
+                fillSquadPage();
+            } else if (b == measurersTab) {
+                fillTem();
+            }
+        });
         pages.setId("pages");
         SplitPane split = new SplitPane(left, pages);
         split.setDividerPositions(0.42);
@@ -321,13 +328,40 @@ public final class Workbench {
         if (l == null) {
             return;
         }
+        // the squad and measurers pages are filled when first looked at: a faster start
+        squadStale = true;
+        temStale = true;
+        Tab current = pages.getSelectionModel().getSelectedItem();
+        if (current == squadTab) {
+            fillSquadPage();
+        } else if (current == measurersTab) {
+            fillTem();
+        }
+        showPerson();
+    }
+
+    private boolean squadStale = true;
+    private boolean temStale = true;
+
+    private void fillTem() {
+        Loaded l = vm.loadedProperty().get();
+        if (l != null && temStale) {
+            temStale = false;
+            tem.getItems().setAll(l.builder().noise().temReport());
+        }
+    }
+
+    private void fillSquadPage() {
+        Loaded l = vm.loadedProperty().get();
+        if (l == null || !squadStale) {
+            return;
+        }
+        squadStale = false;
         String keep = squadChoice.getValue();
         squadChoice.getItems().setAll(l.builder().academy().squads().stream().map(Squad::name).toList());
         squadChoice.setValue(keep != null && squadChoice.getItems().contains(keep) ? keep
                 : squadChoice.getItems().isEmpty() ? null : squadChoice.getItems().get(0));
         showSquad();
-        tem.getItems().setAll(l.builder().noise().temReport());
-        showPerson();
     }
 
     private void showPerson() {
@@ -372,7 +406,7 @@ public final class Workbench {
         }
         l.builder().academy().blocks().stream().filter(b -> b.name().equals(name)).findFirst().ifPresent(b -> {
             BlockPage page = BlockPage.of(org.shapetrail.history.BlockReview.of(l.builder(), b,
-                    org.shapetrail.history.BlockReview.DEFAULT_WINDOW_DAYS), locale);
+                    org.shapetrail.history.BlockReview.DEFAULT_WINDOW_DAYS, p -> l.histories().get(p.id())), locale);
             blockSummary.setText(page.summary());
             blockAthletes.getItems().setAll(page.athletes());
             blockLeftOut.setText(page.leftOut().isEmpty() ? "" : "Left out: " + String.join("; ", page.leftOut()));

@@ -36,6 +36,12 @@ public record BlockReview(TrainingBlock block, int windowDays, List<Athlete> ath
     }
 
     public static BlockReview of(HistoryBuilder b, TrainingBlock block, int windowDays) {
+        return of(b, block, windowDays, b::history);
+    }
+
+    /** As above, taking each member's history from {@code histories} (already computed ones). */
+    public static BlockReview of(HistoryBuilder b, TrainingBlock block, int windowDays,
+                                 java.util.function.Function<Person, PersonHistory> histories) {
         Academy a = b.academy();
         List<Athlete> athletes = new ArrayList<>();
         List<Missing> missing = new ArrayList<>();
@@ -43,7 +49,7 @@ public record BlockReview(TrainingBlock block, int windowDays, List<Athlete> ath
                 .filter(m -> overlaps(m, block)).map(Membership::personId).distinct().toList();
         for (long id : members) {
             Person p = a.person(id).orElseThrow();
-            PersonHistory h = b.history(p);
+            PersonHistory h = histories.apply(p);
             Optional<VisitResult> before = nearest(h.rated(), block.startsOn(), windowDays);
             Optional<VisitResult> after = nearest(h.rated(), block.endsOn(), windowDays);
             if (before.isEmpty() && after.isEmpty()) {
