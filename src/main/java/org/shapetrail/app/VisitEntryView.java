@@ -49,6 +49,8 @@ public final class VisitEntryView {
         DatePicker date = new DatePicker();
         date.setId("visit-date");
         date.valueProperty().bindBidirectional(vm.dateProperty());
+        date.setConverter(new javafx.util.converter.LocalDateStringConverter(java.time.format.FormatStyle.MEDIUM,
+                vm.locale(), java.time.chrono.IsoChronology.INSTANCE));
         ComboBox<Measurer> measurer = new ComboBox<>(vm.measurers());
         measurer.setId("visit-measurer");
         measurer.valueProperty().bindBidirectional(vm.measurerProperty());
@@ -73,7 +75,7 @@ public final class VisitEntryView {
         GridPane grid = new GridPane();
         grid.setHgap(8);
         grid.setVgap(4);
-        grid.getColumnConstraints().addAll(new ColumnConstraints(210), new ColumnConstraints(80),
+        grid.getColumnConstraints().addAll(new ColumnConstraints(250), new ColumnConstraints(80),
                 new ColumnConstraints(80), new ColumnConstraints(80), new ColumnConstraints(360));
         grid.addRow(0, header("Site"), header("Trial 1"), header("Trial 2"), header("Trial 3"), header(""));
         int row = 1;
@@ -109,6 +111,17 @@ public final class VisitEntryView {
         ComboBox<RatingMethod> method = new ComboBox<>();
         method.getItems().setAll(RatingMethod.values());
         method.valueProperty().bindBidirectional(vm.raterMethodProperty());
+        method.setConverter(new StringConverter<>() {
+            @Override
+            public String toString(RatingMethod m) {
+                return m == null ? "" : m.code();
+            }
+
+            @Override
+            public RatingMethod fromString(String s) {
+                return RatingMethod.ofCode(s);
+            }
+        });
         Label raterCmp = new Label();
         raterCmp.setId("rater-comparison");
         raterCmp.textProperty().bind(vm.raterComparisonProperty());

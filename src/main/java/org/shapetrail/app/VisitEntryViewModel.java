@@ -276,7 +276,9 @@ public final class VisitEntryViewModel {
                 .filter(v -> v.visit().measuredAt().toLocalDate().isBefore(date.get()))
                 .filter(v -> editing == null || v.visit().id() != editing.id())
                 .reduce((a, b) -> b)
-                .ifPresent(prev -> liveVerdict.set("Against " + prev.visit().measuredAt().toLocalDate() + ": "
+                .ifPresent(prev -> liveVerdict.set("Against the visit of " + prev.visit().measuredAt().toLocalDate()
+                        .format(java.time.format.DateTimeFormatter.ofLocalizedDate(java.time.format.FormatStyle.MEDIUM)
+                                .withLocale(locale)) + ": "
                         + PersonPage.words(builder.verdict(prev, now), locale)));
     }
 
@@ -397,6 +399,10 @@ public final class VisitEntryViewModel {
 
     public Person person() {
         return person;
+    }
+
+    public Locale locale() {
+        return locale;
     }
 
     public boolean isEdit() {

@@ -69,7 +69,9 @@ class VisitEntryViewModelTest {
         fillFull(vm);
         assertTrue(vm.canSaveProperty().get(), vm.problems().toString());
         assertTrue(vm.liveRatingProperty().get().startsWith("Somatotype "), vm.liveRatingProperty().get());
-        assertTrue(vm.liveVerdictProperty().get().startsWith("Against 2026-03-24: "), vm.liveVerdictProperty().get());
+        // the previous rated visit of this person in the demo file is the block-end visit of 24 March 2026
+        assertTrue(vm.liveVerdictProperty().get().startsWith("Against the visit of 24 Mar 2026: "),
+                vm.liveVerdictProperty().get());
         var saved = vm.save().orElseThrow();
         try (Database db = Database.open(file)) {
             var v = db.inTransaction(tx -> tx.visits().find(saved.id())).orElseThrow();
