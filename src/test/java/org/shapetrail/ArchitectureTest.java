@@ -37,4 +37,22 @@ class ArchitectureTest {
                         "org.shapetrail.chart..", "org.shapetrail.letters..", "org.shapetrail.exchange..");
         rule.check(classes);
     }
+
+    @Test
+    void innerLayersDoNotDependOnTheDesktopOrCommandLine() {
+        ArchRule rule = noClasses().that().resideInAnyPackage("org.shapetrail.store..", "org.shapetrail.history..",
+                "org.shapetrail.chart", "org.shapetrail.chart.svg..", "org.shapetrail.chart.png..",
+                "org.shapetrail.chart.pdf..", "org.shapetrail.letters..", "org.shapetrail.exchange..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.shapetrail.app..", "org.shapetrail.cli..");
+        rule.check(classes);
+    }
+
+    @Test
+    void onlyTheScreenRendererAndTheAppUseJavaFx() {
+        ArchRule rule = noClasses().that().resideInAnyPackage("org.shapetrail.store..", "org.shapetrail.history..",
+                "org.shapetrail.chart", "org.shapetrail.chart.svg..", "org.shapetrail.chart.png..",
+                "org.shapetrail.chart.pdf..", "org.shapetrail.letters..", "org.shapetrail.exchange..",
+                "org.shapetrail.cli..").should().dependOnClassesThat().resideInAnyPackage("javafx..");
+        rule.check(classes);
+    }
 }
