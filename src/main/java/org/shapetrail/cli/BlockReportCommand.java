@@ -32,9 +32,8 @@ final class BlockReportCommand implements Callable<Integer> {
             description = "days around the block's first and last day to look for visits (default 21)")
     int window;
 
-    @Option(names = "--format", description = "text (default) or csv", defaultValue = "text",
-            converter = FormatConverter.class)
-    OutputFormat format;
+    @Mixin
+    FormatOption output;
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -66,18 +65,18 @@ final class BlockReportCommand implements Callable<Integer> {
                     Table.num(x.change().sadNoise95(), 2), Table.num(x.change().change()[1], 2),
                     x.change().verdict().words(), x.change().basis());
         }
-        if (format == OutputFormat.TEXT) {
+        if (output.format == OutputFormat.TEXT) {
             out.println(r.block().name() + " (" + squad + "), " + r.block().startsOn() + " to " + r.block().endsOn()
                     + "; visits within " + window + " days of the start and the end");
             out.println();
         }
-        athletes.write(out, format);
+        athletes.write(out, output.format);
         out.println();
         Table missing = new Table("left_out", "reason");
         for (BlockReview.Missing m : r.missing()) {
             missing.row(m.person().displayName(), m.reason());
         }
-        missing.write(out, format);
+        missing.write(out, output.format);
         BlockResult g = r.result();
         if (g != null) {
             out.println();
@@ -88,7 +87,7 @@ final class BlockReportCommand implements Callable<Integer> {
                         Table.num(c.pValue(), 4), Table.num(c.effectSize(), 2), Table.num(c.effectLow(), 2),
                         Table.num(c.effectHigh(), 2));
             }
-            t.write(out, format);
+            t.write(out, output.format);
             out.println();
             Table s = new Table("measure", "value");
             s.row("athletes with both visits", g.n());
@@ -103,7 +102,7 @@ final class BlockReportCommand implements Callable<Integer> {
                 s.row("p", Table.num(g.hotelling().pValue(), 4));
             }
             s.row("athletes changed beyond noise", g.beyondNoise() + " of " + g.n());
-            s.write(out, format);
+            s.write(out, output.format);
         }
         return 0;
     }

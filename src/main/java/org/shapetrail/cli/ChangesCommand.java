@@ -9,10 +9,8 @@ import org.shapetrail.history.PersonHistory;
 import org.shapetrail.noise.ChangeVerdict;
 import org.shapetrail.store.Database;
 import org.shapetrail.store.Person;
-import org.shapetrail.store.StoreException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
@@ -27,9 +25,8 @@ final class ChangesCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "ID", description = "The person's id (see the people command).")
     long personId;
 
-    @Option(names = "--format", description = "text (default) or csv", defaultValue = "text",
-            converter = FormatConverter.class)
-    OutputFormat format;
+    @Mixin
+    FormatOption output;
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -40,8 +37,7 @@ final class ChangesCommand implements Callable<Integer> {
         PersonHistory h;
         try (Database d = db.open()) {
             Academy a = Academy.load(d);
-            Person p = a.person(personId).orElseThrow(() -> new StoreException("There is no person with id "
-                    + personId + "."));
+            Person p = Lookup.person(a, personId);
             h = HistoryBuilder.of(a, AnalysisSettings.standard()).history(p);
         }
         Table t = new Table("from", "to", "from_rating", "to_rating", "sad", "sad_noise_95", "d2", "p",
@@ -56,10 +52,10 @@ final class ChangesCommand implements Callable<Integer> {
             add(t, rated.get(0).visit().measuredAt().toLocalDate() + " (first)",
                     rated.get(rated.size() - 1).visit().measuredAt().toLocalDate() + " (last)", h.firstToLast());
         }
-        if (format == OutputFormat.TEXT) {
+        if (output.format == OutputFormat.TEXT) {
             out.println(h.person().displayName() + ": " + h.rated().size() + " rated visit(s)");
         }
-        t.write(out, format);
+        t.write(out, output.format);
         return 0;
     }
 

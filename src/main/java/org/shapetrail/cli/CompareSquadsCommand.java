@@ -15,7 +15,6 @@ import org.shapetrail.history.VisitResult;
 import org.shapetrail.somatotype.Rating;
 import org.shapetrail.store.Database;
 import org.shapetrail.store.Squad;
-import org.shapetrail.store.StoreException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -39,9 +38,8 @@ final class CompareSquadsCommand implements Callable<Integer> {
     @Option(names = "--on", paramLabel = "DATE", description = "members on this day (default today), yyyy-mm-dd")
     LocalDate on;
 
-    @Option(names = "--format", description = "text (default) or csv", defaultValue = "text",
-            converter = FormatConverter.class)
-    OutputFormat format;
+    @Mixin
+    FormatOption output;
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -63,7 +61,7 @@ final class CompareSquadsCommand implements Callable<Integer> {
                     Table.num(x.pValue(), 4), Table.num(x.effectSize(), 2), Table.num(x.effectLow(), 2),
                     Table.num(x.effectHigh(), 2));
         }
-        t.write(out, format);
+        t.write(out, output.format);
         out.println();
         Table s = new Table("measure", "value");
         s.row(first + ": n, mean, SAM", c.first().n() + ", " + c.first().meanRating().toDisplayString() + ", "
@@ -76,14 +74,12 @@ final class CompareSquadsCommand implements Callable<Integer> {
             s.row("F (" + c.hotelling().df1() + ", " + c.hotelling().df2() + ")", Table.num(c.hotelling().f(), 2));
             s.row("p", Table.num(c.hotelling().pValue(), 4));
         }
-        s.write(out, format);
+        s.write(out, output.format);
         return 0;
     }
 
     private static List<Rating> latest(Academy a, HistoryBuilder b, String name, LocalDate day) {
-        Squad s = a.squads().stream().filter(q -> q.name().equalsIgnoreCase(name.strip())).findFirst()
-                .orElseThrow(() -> new StoreException("There is no squad called \"" + name + "\"; the squads are: "
-                        + String.join(", ", a.squads().stream().map(Squad::name).toList())));
+        Squad s = Lookup.squad(a, name);
         List<Rating> out = new ArrayList<>();
         for (long id : a.membersOn(s.id(), day)) {
             List<VisitResult> rated = b.history(a.person(id).orElseThrow()).rated().stream()

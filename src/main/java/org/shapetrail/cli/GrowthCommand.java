@@ -13,13 +13,9 @@ import org.shapetrail.history.HistoryBuilder;
 import org.shapetrail.history.PersonHistory;
 import org.shapetrail.measure.Site;
 import org.shapetrail.store.Database;
-import org.shapetrail.store.Person;
-import org.shapetrail.store.Squad;
-import org.shapetrail.store.StoreException;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /** {@code growth}: stature velocity, maturity and rapid-growth alerts for a person or a squad. */
@@ -30,20 +26,11 @@ final class GrowthCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
 
-    static final class Who {
-        @Option(names = "--person", paramLabel = "ID", description = "one person's id")
-        Long person;
-
-        @Option(names = "--squad", paramLabel = "NAME", description = "the squad's current members")
-        String squad;
-    }
-
     @ArgGroup(exclusive = true, multiplicity = "1")
-    Who who;
+    Lookup.Who who;
 
-    @Option(names = "--format", description = "text (default) or csv", defaultValue = "text",
-            converter = FormatConverter.class)
-    OutputFormat format;
+    @Mixin
+    FormatOption output;
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -55,18 +42,7 @@ final class GrowthCommand implements Callable<Integer> {
         try (Database d = db.open()) {
             Academy a = Academy.load(d);
             HistoryBuilder b = HistoryBuilder.of(a, AnalysisSettings.standard());
-            if (who.person != null) {
-                Person p = a.person(who.person).orElseThrow(() -> new StoreException("There is no person with id "
-                        + who.person + "."));
-                histories.add(b.history(p));
-            } else {
-                Squad s = a.squads().stream().filter(q -> q.name().equalsIgnoreCase(who.squad.strip())).findFirst()
-                        .orElseThrow(() -> new StoreException("There is no squad called \"" + who.squad + "\"; the"
-                                + " squads are: " + String.join(", ", a.squads().stream().map(Squad::name).toList())));
-                for (long id : a.membersOn(s.id(), java.time.LocalDate.now())) {
-                    histories.add(b.history(a.person(id).orElseThrow()));
-                }
-            }
+            histories.addAll(who.histories(a, b, java.time.LocalDate.now()));
         }
         Table t = new Table("id", "name", "age", "stature_cm", "velocity_cm_per_year", "velocity_se", "interval_years",
                 "rapid_growth", "maturity_status", "maturity_offset_years", "estimated_age_at_phv", "see_years",
@@ -91,8 +67,8 @@ final class GrowthCommand implements Callable<Integer> {
                     g.midParentTargetCm() == null ? "" : Table.num(g.midParentTargetCm(), 1),
                     g.percentOfTarget() == null ? "" : Table.num(g.percentOfTarget(), 1));
         }
-        t.write(out, format);
-        if (format == OutputFormat.TEXT) {
+        t.write(out, output.format);
+        if (output.format == OutputFormat.TEXT) {
             out.println();
             out.println("Maturity: " + MaturityEstimate.CAUTION);
             out.println("Rapid growth: " + org.shapetrail.growth.GrowthAlert.CAUTION);

@@ -15,8 +15,6 @@ import org.shapetrail.letters.LetterBatch;
 import org.shapetrail.letters.LetterComposer;
 import org.shapetrail.letters.LetterSettings;
 import org.shapetrail.store.Database;
-import org.shapetrail.store.Squad;
-import org.shapetrail.store.StoreException;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -30,16 +28,8 @@ final class LettersCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
 
-    static final class Who {
-        @Option(names = "--person", paramLabel = "ID")
-        Long person;
-
-        @Option(names = "--squad", paramLabel = "NAME", description = "the squad's current members")
-        String squad;
-    }
-
     @ArgGroup(exclusive = true, multiplicity = "1")
-    Who who;
+    Lookup.Who who;
 
     @Option(names = "--from", required = true, paramLabel = "DATE", description = "first day of the period, yyyy-mm-dd")
     LocalDate from;
@@ -76,16 +66,7 @@ final class LettersCommand implements Callable<Integer> {
         try (Database d = db.open()) {
             Academy a = Academy.load(d);
             b = HistoryBuilder.of(a, AnalysisSettings.standard());
-            if (who.person != null) {
-                people.add(b.history(a.person(who.person).orElseThrow(() -> new StoreException(
-                        "There is no person with id " + who.person + "."))));
-            } else {
-                Squad s = a.squads().stream().filter(q -> q.name().equalsIgnoreCase(who.squad.strip())).findFirst()
-                        .orElseThrow(() -> new StoreException("There is no squad called \"" + who.squad + "\"."));
-                for (long id : a.membersOn(s.id(), to)) {
-                    people.add(b.history(a.person(id).orElseThrow()));
-                }
-            }
+            people.addAll(who.histories(a, b, to));
         }
         LetterComposer c = new LetterComposer(b, new LetterSettings(academy, sender, role, contact, from, to, skinfolds),
                 Locale.UK);

@@ -9,7 +9,6 @@ import org.shapetrail.noise.TemTargets;
 import org.shapetrail.store.Database;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /** {@code tem}: each measurer's technical error of measurement per site, against the targets. */
@@ -19,9 +18,8 @@ final class TemCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
 
-    @Option(names = "--format", description = "text (default) or csv", defaultValue = "text",
-            converter = FormatConverter.class)
-    OutputFormat format;
+    @Mixin
+    FormatOption output;
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -43,7 +41,7 @@ final class TemCommand implements Callable<Integer> {
                     Table.num(TemTargets.target(r.site().kind()), 1), r.standing().words(),
                     r.usesDefault() ? "default (fewer than " + model.defaults().minPeople() + " people)" : "own TEM");
         }
-        t.write(out, format);
+        t.write(out, output.format);
         if (!model.interMeasurer().isEmpty()) {
             out.println();
             Table i = new Table("measurer_1", "measurer_2", "site", "unit", "pairs", "inter_tem", "relative_percent");
@@ -51,7 +49,7 @@ final class TemCommand implements Callable<Integer> {
                 i.row(m.first().name(), m.second().name(), m.site().code(), m.site().unit().symbol(), m.pairs(),
                         Table.num(m.tem(), 3), Table.num(m.relativePercent(), 2));
             }
-            i.write(out, format);
+            i.write(out, output.format);
         }
         return 0;
     }
