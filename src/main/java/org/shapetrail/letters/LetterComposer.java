@@ -80,6 +80,7 @@ public final class LetterComposer {
             sections.add(growth(h, visits, first));
             sections.add(shape(h, visits, first, skinfolds));
         }
+        blockSection(h, first).ifPresent(sections::add);
         sections.add(new Letter.Section("What these numbers mean, and what they do not", List.of(
                 "They describe body shape and size on the days of measuring. Shape changes with growth, training and"
                         + " time; there is no right or wrong shape for a sport or for a person.",
@@ -192,6 +193,38 @@ public final class LetterComposer {
                     + " larger than measurement error, dotted and dashed lines steps within or close to it.");
         }
         return new Letter.Section("Body shape", ps);
+    }
+
+    /** A paragraph on each training block of the period the person took part in (visits near both ends). */
+    private java.util.Optional<Letter.Section> blockSection(PersonHistory h, String first) {
+        List<String> ps = new ArrayList<>();
+        for (var block : builder.academy().blocks()) {
+            if (block.endsOn().isBefore(settings.from()) || block.startsOn().isAfter(settings.to())) {
+                continue;
+            }
+            boolean member = builder.academy().memberships().stream().anyMatch(m -> m.personId() == h.person().id()
+                    && m.squadId() == block.squadId() && !m.joinedOn().isAfter(block.endsOn())
+                    && (m.leftOn() == null || !m.leftOn().isBefore(block.startsOn())));
+            if (!member) {
+                continue;
+            }
+            var review = org.shapetrail.history.BlockReview.of(builder, block,
+                    org.shapetrail.history.BlockReview.DEFAULT_WINDOW_DAYS, p -> p.id() == h.person().id() ? h
+                            : builder.history(p));
+            review.athletes().stream().filter(a -> a.person().id() == h.person().id()).findFirst().ifPresent(a -> {
+                String words = switch (a.change().verdict()) {
+                    case BEYOND_NOISE -> "a change in body shape larger than measurement error";
+                    case BORDERLINE -> "a change close to the size of measurement error";
+                    case WITHIN_NOISE -> "no change beyond measurement error";
+                };
+                ps.add(first + " took part in the " + block.name() + " (" + block.startsOn().format(dates) + " to "
+                        + block.endsOn().format(dates) + "). Measured before and after it, " + first + " showed "
+                        + words + ": muscle and bone build " + n(a.change().from().mesomorphy(), 1) + " to "
+                        + n(a.change().to().mesomorphy(), 1) + ".");
+            });
+        }
+        return ps.isEmpty() ? java.util.Optional.empty()
+                : java.util.Optional.of(new Letter.Section("Training block", ps));
     }
 
     private ChartModel chart(PersonHistory h, List<VisitResult> visits) {

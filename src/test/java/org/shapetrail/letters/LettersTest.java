@@ -164,6 +164,20 @@ class LettersTest {
     }
 
     @Test
+    void aSeniorInTheBlockGetsTheBlockSectionWithTheVerdict() {
+        PersonHistory h = history("Freya Breakwater");
+        Letter l = new LetterComposer(builder, YEAR, Locale.UK).compose(h);
+        var review = org.shapetrail.history.BlockReview.of(builder, builder.academy().blocks().get(0), 21);
+        var me = review.athletes().stream().filter(a -> a.person().id() == h.person().id()).findFirst().orElseThrow();
+        String text = l.allText();
+        assertTrue(text.contains("took part in the Winter strength block"), text);
+        assertTrue(text.contains("muscle and bone build " + String.format(Locale.UK, "%.1f", me.change().from()
+                .mesomorphy()) + " to " + String.format(Locale.UK, "%.1f", me.change().to().mesomorphy())), text);
+        assertEquals(me.change().verdict() == org.shapetrail.noise.Verdict.BEYOND_NOISE,
+                text.contains("larger than measurement error: muscle"));
+    }
+
+    @Test
     void underSixteensAreDescribedWithoutSkinfoldsUnlessAsked() {
         PersonHistory h = history("Lorcan Zennor-Blythe");
         Letter without = new LetterComposer(builder, YEAR, Locale.UK).compose(h);
