@@ -98,6 +98,9 @@ public final class Workbench {
         Button open = new Button("Open file…");
         open.setId("open-file");
         open.setOnAction(e -> chooseFile());
+        Button bring = new Button("Bring in a spreadsheet…");
+        bring.setId("import-file");
+        bring.setOnAction(e -> importFile());
         Region gap = new Region();
         HBox.setHgrow(gap, Priority.ALWAYS);
         dark.setId("dark-theme");
@@ -108,7 +111,7 @@ public final class Workbench {
                 root.getStyleClass().remove("dark");
             }
         });
-        HBox bar = new HBox(12, title, file, gap, open, dark);
+        HBox bar = new HBox(12, title, file, gap, bring, open, dark);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.getStyleClass().add("app-header");
         bar.setPadding(new Insets(10, 14, 10, 14));
@@ -470,6 +473,26 @@ public final class Workbench {
                 folder.toPath(), (done, total) -> progress.update(done, total, "Letter " + done + " of " + total),
                 progress::isCancelled), files -> vm.statusProperty().set("Wrote " + Math.max(0, files.size() - 1)
                 + " letter(s) to " + folder), t -> vm.errorProperty().set(Errors.describe(t)));
+    }
+
+    private void importFile() {
+        Loaded l = vm.loadedProperty().get();
+        if (l == null) {
+            return;
+        }
+        FileChooser fc = new FileChooser();
+        fc.setTitle("A spreadsheet saved as CSV");
+        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("CSV files", "*.csv", "*.txt"));
+        var f = fc.showOpenDialog(root.getScene().getWindow());
+        if (f == null) {
+            return;
+        }
+        try {
+            new ImportWizardView(new ImportWizardViewModel(l.file(), f.toPath()), root.getScene().getWindow(),
+                    vm::reload).show();
+        } catch (java.io.IOException | RuntimeException e) {
+            vm.errorProperty().set("The file " + f.getName() + " cannot be read: " + Errors.describe(e));
+        }
     }
 
     private void chooseFile() {

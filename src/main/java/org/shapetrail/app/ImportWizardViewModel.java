@@ -1,0 +1,183 @@
+package org.shapetrail.app;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import org.apache.commons.csv.CSVParser;
+import org.shapetrail.exchange.Column;
+import org.shapetrail.exchange.ColumnMapper;
+import org.shapetrail.exchange.CsvInput;
+import org.shapetrail.exchange.ImportOptions;
+import org.shapetrail.exchange.ImportPlan;
+import org.shapetrail.exchange.Importer;
+import org.shapetrail.history.Academy;
+import org.shapetrail.measure.DecimalStyle;
+import org.shapetrail.measure.Site;
+import org.shapetrail.store.Database;
+
+/**
+ * The import wizard: the file's columns with the suggested meaning of each (which the user may change),
+ * the options, the dry run with its row-by-row report, and the commit, which is offered only when no row
+ * is rejected.
+ */
+public final class ImportWizardViewModel {
+    /** What a column can be set to, in words, and the column it makes. */
+    public record Choice(String words, Column.Role role, Site site, int trial) {
+        @Override
+        public String toString() {
+            return words;
+        }
+
+        Column column(String header) {
+            return new Column(header, role, site, trial, role == Column.Role.SITE_VALUE
+                    ? ColumnMapper.suggest(header).unit() : null);
+        }
+    }
+
+    public static final List<Choice> CHOICES = choices();
+
+    private final Path database;
+    private final Path file;
+    private final List<String> headers;
+    private final ObservableList<ObjectProperty<Choice>> mapping = FXCollections.observableArrayList();
+    private final BooleanProperty createMissing = new SimpleBooleanProperty(false);
+    private final BooleanProperty monthFirst = new SimpleBooleanProperty(false);
+    private final ObjectProperty<DecimalStyle> decimals = new SimpleObjectProperty<>();
+    private final ObjectProperty<ImportPlan> plan = new SimpleObjectProperty<>();
+    private final StringProperty summary = new SimpleStringProperty("");
+    private final ObservableList<String> report = FXCollections.observableArrayList();
+    private final BooleanProperty canCommit = new SimpleBooleanProperty(false);
+
+    public ImportWizardViewModel(Path database, Path file) throws java.io.IOException {
+        this.database = database;
+        this.file = file;
+        CsvInput.Format f = CsvInput.detect(file);
+        decimals.set(f.decimals());
+        try (CSVParser p = CsvInput.parser(file, f.delimiter())) {
+            headers = new ArrayList<>(p.getHeaderNames());
+        }
+        for (String h : headers) {
+            mapping.add(new SimpleObjectProperty<>(choiceFor(ColumnMapper.suggest(h))));
+        }
+        mapping.forEach(m -> m.addListener(o -> invalidate()));
+        createMissing.addListener(o -> invalidate());
+        monthFirst.addListener(o -> invalidate());
+        decimals.addListener(o -> invalidate());
+    }
+
+    private static List<Choice> choices() {
+        List<Choice> c = new ArrayList<>();
+        c.add(new Choice("leave out", Column.Role.IGNORED, null, 0));
+        c.add(new Choice("person id", Column.Role.PERSON_ID, null, 0));
+        c.add(new Choice("name", Column.Role.NAME, null, 0));
+        c.add(new Choice("date of birth", Column.Role.BIRTH_DATE, null, 0));
+        c.add(new Choice("sex", Column.Role.SEX, null, 0));
+        c.add(new Choice("visit date", Column.Role.DATE, null, 0));
+        c.add(new Choice("visit time", Column.Role.TIME, null, 0));
+        c.add(new Choice("measurer", Column.Role.MEASURER, null, 0));
+        c.add(new Choice("context", Column.Role.CONTEXT, null, 0));
+        c.add(new Choice("site name (a row per trial)", Column.Role.SITE_NAME, null, 0));
+        c.add(new Choice("trial number (a row per trial)", Column.Role.TRIAL_NUMBER, null, 0));
+        c.add(new Choice("value (a row per trial)", Column.Role.VALUE, null, 0));
+        c.add(new Choice("unit (a row per trial)", Column.Role.UNIT, null, 0));
+        for (Site s : Site.values()) {
+            c.add(new Choice(s.label() + ", final value", Column.Role.SITE_VALUE, s, 0));
+            for (int t = 1; t <= 3; t++) {
+                c.add(new Choice(s.label() + ", trial " + t, Column.Role.SITE_VALUE, s, t));
+            }
+        }
+        return List.copyOf(c);
+    }
+
+    static Choice choiceFor(Column c) {
+        return CHOICES.stream().filter(x -> x.role() == c.role() && x.site() == c.site() && x.trial() == c.trial())
+                .findFirst().orElse(CHOICES.get(0));
+    }
+
+    private void invalidate() {
+        plan.set(null);
+        canCommit.set(false);
+        summary.set("Settings changed: run the check again.");
+        report.clear();
+    }
+
+    /** The dry run with the current mapping and options; nothing is written. */
+    public void dryRun() {
+        List<Column> cols = new ArrayList<>();
+        for (int i = 0; i < headers.size(); i++) {
+            cols.add(mapping.get(i).get().column(headers.get(i)));
+        }
+        ImportPlan p;
+        try (Database db = Database.open(database)) {
+            p = Importer.dryRun(file, Academy.load(db),
+                    new ImportOptions(decimals.get(), monthFirst.get(), createMissing.get()), cols);
+        }
+        plan.set(p);
+        summary.set(p.summary());
+        List<String> lines = new ArrayList<>();
+        for (ImportPlan.RowReport r : p.rows()) {
+            if (r.outcome() != ImportPlan.Outcome.IMPORTED) {
+                lines.add("line " + r.line() + ": " + r.outcome().words() + " — " + r.reason());
+            }
+        }
+        if (lines.isEmpty() && p.fileProblems().isEmpty()) {
+            lines.add("Every row can be imported.");
+        }
+        report.setAll(lines);
+        canCommit.set(p.canCommit() && !p.visits().isEmpty());
+    }
+
+    /** Writes the checked import in one transaction; returns the number of visits. */
+    public int commit() {
+        ImportPlan p = plan.get();
+        if (p == null || !canCommit.get()) {
+            throw new IllegalStateException("run the check first; an import with rejected rows is never written");
+        }
+        try (Database db = Database.open(database)) {
+            int n = Importer.commit(db, p);
+            summary.set("Imported " + n + " visit(s).");
+            canCommit.set(false);
+            return n;
+        }
+    }
+
+    public List<String> headers() {
+        return headers;
+    }
+
+    public ObservableList<ObjectProperty<Choice>> mapping() {
+        return mapping;
+    }
+
+    public BooleanProperty createMissingProperty() {
+        return createMissing;
+    }
+
+    public BooleanProperty monthFirstProperty() {
+        return monthFirst;
+    }
+
+    public ObjectProperty<DecimalStyle> decimalsProperty() {
+        return decimals;
+    }
+
+    public StringProperty summaryProperty() {
+        return summary;
+    }
+
+    public ObservableList<String> report() {
+        return report;
+    }
+
+    public BooleanProperty canCommitProperty() {
+        return canCommit;
+    }
+}
