@@ -42,6 +42,11 @@ public record PersonPage(String title, List<String> profile, String latestChange
             profile.add("Mid-parent target height " + Numbers.fmt(locale, g.midParentTargetCm(), 1) + " cm; "
                     + Numbers.fmt(locale, g.percentOfTarget(), 1) + " % reached (Tanner et al. 1970; a guide only)");
         }
+        if (g.predictedAdultCm() != null) {
+            profile.add("Predicted adult stature " + Numbers.fmt(locale, g.predictedAdultCm(), 1) + " cm (entered); "
+                    + Numbers.fmt(locale, g.percentOfPredicted(), 1) + " % reached — bio-banding band "
+                    + g.band().words() + " (common practice; a guide only)");
+        }
         if (!p.consent().photographs()) {
             profile.add("Photographs: off (no consent recorded)");
         }

@@ -46,11 +46,12 @@ final class GrowthCommand implements Callable<Integer> {
         }
         Table t = new Table("id", "name", "age", "stature_cm", "velocity_cm_per_year", "velocity_se", "interval_years",
                 "rapid_growth", "maturity_status", "maturity_offset_years", "estimated_age_at_phv", "see_years",
-                "method", "observed_phv", "mid_parent_target_cm", "percent_of_target");
+                "method", "observed_phv", "mid_parent_target_cm", "percent_of_target", "predicted_adult_cm",
+                "percent_of_predicted", "bio_band");
         for (PersonHistory h : histories) {
             if (h.visits().isEmpty()) {
                 t.row(h.person().id(), h.person().displayName(), "", "", "", "", "", "", "", "", "", "", "",
-                        "no visits", "", "");
+                        "no visits", "", "", "", "", "");
                 continue;
             }
             var last = h.latest().orElseThrow();
@@ -65,7 +66,10 @@ final class GrowthCommand implements Callable<Integer> {
                     m == null ? "" : Table.num(m.ageAtPhv(), 1), m == null ? "" : Table.num(m.seeYears(), 2),
                     m == null ? "" : m.method().citation(), g.observedPhv().describe(),
                     g.midParentTargetCm() == null ? "" : Table.num(g.midParentTargetCm(), 1),
-                    g.percentOfTarget() == null ? "" : Table.num(g.percentOfTarget(), 1));
+                    g.percentOfTarget() == null ? "" : Table.num(g.percentOfTarget(), 1),
+                    g.predictedAdultCm() == null ? "" : Table.num(g.predictedAdultCm(), 1),
+                    g.percentOfPredicted() == null ? "" : Table.num(g.percentOfPredicted(), 1),
+                    g.band() == null ? "" : g.band().words());
         }
         t.write(out, output.format);
         if (output.format == OutputFormat.TEXT) {

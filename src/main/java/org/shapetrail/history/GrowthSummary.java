@@ -14,9 +14,17 @@ import org.shapetrail.growth.Velocity;
  * @param observedPhv the person's own peak, or why there is none
  * @param midParentTargetCm mid-parent target height, or null without both parents' statures
  * @param rapidGrowth true when the latest velocity is above the alert threshold
+ * @param predictedAdultCm predicted adult stature entered by the user, or null
+ * @param percentOfPredicted latest stature as percent of it, or null
  */
 public record GrowthSummary(Velocity latestVelocity, MaturityEstimate maturity, ObservedPhv.Result observedPhv,
-                            Double midParentTargetCm, Double percentOfTarget, boolean rapidGrowth) {
+                            Double midParentTargetCm, Double percentOfTarget, boolean rapidGrowth,
+                            Double predictedAdultCm, Double percentOfPredicted) {
+    /** The bio-banding band of the percent of predicted adult stature, or null. */
+    public org.shapetrail.growth.TargetHeight.Band band() {
+        return percentOfPredicted == null ? null : org.shapetrail.growth.TargetHeight.Band.of(percentOfPredicted);
+    }
+
     public Optional<Velocity> velocity() {
         return Optional.ofNullable(latestVelocity);
     }

@@ -129,6 +129,7 @@ public final class HistoryBuilder {
         MaturityEstimate maturity = null;
         Double target = null;
         Double percent = null;
+        Double predictedPercent = null;
         if (!withStature.isEmpty()) {
             VisitResult last = withStature.get(withStature.size() - 1);
             double stature = last.finalValues().get(Site.STATURE);
@@ -143,6 +144,9 @@ public final class HistoryBuilder {
                             sh == null ? Double.NaN : sh, Double.NaN);
                 }
             }
+            if (p.predictedAdultStatureCm() != null) {
+                predictedPercent = TargetHeight.percentAttained(stature, p.predictedAdultStatureCm());
+            }
             if (p.fatherStatureCm() != null && p.motherStatureCm() != null) {
                 target = TargetHeight.midParent(p.sex(), p.fatherStatureCm(), p.motherStatureCm());
                 percent = TargetHeight.percentAttained(stature, target);
@@ -155,7 +159,8 @@ public final class HistoryBuilder {
         ObservedPhv.Result phv = ObservedPhv.fit(points);
         boolean rapid = velocity != null && last(results).ageYears() < MAX_MATURITY_AGE
                 && settings.alert().raisedBy(velocity);
-        return new GrowthSummary(velocity, maturity, phv, target, percent, rapid);
+        return new GrowthSummary(velocity, maturity, phv, target, percent, rapid, p.predictedAdultStatureCm(),
+                predictedPercent);
     }
 
     private static VisitResult last(List<VisitResult> results) {

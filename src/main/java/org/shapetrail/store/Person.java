@@ -10,9 +10,10 @@ import org.shapetrail.measure.Sex;
  * @param id database id, 0 before the person is saved
  * @param fatherStatureCm father's stature in cm, or null when not recorded
  * @param motherStatureCm mother's stature in cm, or null when not recorded
+ * @param predictedAdultStatureCm a predicted adult stature entered from another method, cm, or null
  */
 public record Person(long id, String displayName, Sex sex, LocalDate birthDate, Double fatherStatureCm,
-                     Double motherStatureCm, String notes, Consent consent) {
+                     Double motherStatureCm, String notes, Consent consent, Double predictedAdultStatureCm) {
     public Person {
         Objects.requireNonNull(displayName, "displayName");
         if (displayName.isBlank()) {
@@ -24,6 +25,7 @@ public record Person(long id, String displayName, Sex sex, LocalDate birthDate, 
         consent = consent == null ? Consent.NONE : consent;
         parentStature("father's stature", fatherStatureCm);
         parentStature("mother's stature", motherStatureCm);
+        parentStature("predicted adult stature", predictedAdultStatureCm);
     }
 
     private static void parentStature(String what, Double cm) {
@@ -34,18 +36,24 @@ public record Person(long id, String displayName, Sex sex, LocalDate birthDate, 
 
     /** A person not yet saved. */
     public static Person draft(String displayName, Sex sex, LocalDate birthDate) {
-        return new Person(0, displayName, sex, birthDate, null, null, "", Consent.NONE);
+        return new Person(0, displayName, sex, birthDate, null, null, "", Consent.NONE, null);
     }
 
     public Person withId(long newId) {
-        return new Person(newId, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, consent);
+        return new Person(newId, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, consent,
+                predictedAdultStatureCm);
     }
 
     public Person withConsent(Consent c) {
-        return new Person(id, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, c);
+        return new Person(id, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, c,
+                predictedAdultStatureCm);
     }
 
     public Person withParents(Double fatherCm, Double motherCm) {
-        return new Person(id, displayName, sex, birthDate, fatherCm, motherCm, notes, consent);
+        return new Person(id, displayName, sex, birthDate, fatherCm, motherCm, notes, consent, predictedAdultStatureCm);
+    }
+
+    public Person withPredictedAdultStature(Double cm) {
+        return new Person(id, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, consent, cm);
     }
 }

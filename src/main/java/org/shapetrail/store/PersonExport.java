@@ -40,6 +40,7 @@ public final class PersonExport {
                 .field("birthDate", p.birthDate().toString())
                 .field("fatherStatureCm", p.fatherStatureCm())
                 .field("motherStatureCm", p.motherStatureCm())
+                .field("predictedAdultStatureCm", p.predictedAdultStatureCm())
                 .field("notes", p.notes());
         j.key("consent").open('{')
                 .field("measurement", p.consent().measurement())

@@ -14,7 +14,7 @@ import org.shapetrail.measure.Sex;
 /** People: insert, update, find, list and erase (with everything that hangs on them). */
 public final class PersonRepository {
     private static final String COLUMNS = "id, display_name, sex, birth_date, father_stature_cm, mother_stature_cm,"
-            + " notes, consent_measurement, consent_photographs, consent_share_with_parent";
+            + " notes, consent_measurement, consent_photographs, consent_share_with_parent, predicted_adult_stature_cm";
     private final Connection c;
 
     PersonRepository(Connection c) {
@@ -25,7 +25,8 @@ public final class PersonRepository {
     public Person insert(Person p) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO person (display_name, sex, birth_date,"
                 + " father_stature_cm, mother_stature_cm, notes, consent_measurement, consent_photographs,"
-                + " consent_share_with_parent) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
+                + " consent_share_with_parent, predicted_adult_stature_cm) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)",
+                Statement.RETURN_GENERATED_KEYS)) {
             bind(ps, p);
             ps.executeUpdate();
             return p.withId(Sql.generatedId(ps));
@@ -36,9 +37,9 @@ public final class PersonRepository {
     public void update(Person p) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("UPDATE person SET display_name = ?, sex = ?, birth_date = ?,"
                 + " father_stature_cm = ?, mother_stature_cm = ?, notes = ?, consent_measurement = ?,"
-                + " consent_photographs = ?, consent_share_with_parent = ? WHERE id = ?")) {
+                + " consent_photographs = ?, consent_share_with_parent = ?, predicted_adult_stature_cm = ? WHERE id = ?")) {
             bind(ps, p);
-            ps.setLong(10, p.id());
+            ps.setLong(11, p.id());
             if (ps.executeUpdate() != 1) {
                 throw new StoreException("There is no person with id " + p.id() + ".");
             }
@@ -55,6 +56,7 @@ public final class PersonRepository {
         ps.setInt(7, p.consent().measurement() ? 1 : 0);
         ps.setInt(8, p.consent().photographs() ? 1 : 0);
         ps.setInt(9, p.consent().shareWithParent() ? 1 : 0);
+        Sql.setNullableDouble(ps, 10, p.predictedAdultStatureCm());
     }
 
     public Optional<Person> find(long id) throws SQLException {
@@ -95,6 +97,6 @@ public final class PersonRepository {
                 LocalDate.parse(rs.getString("birth_date")), Sql.nullableDouble(rs, "father_stature_cm"),
                 Sql.nullableDouble(rs, "mother_stature_cm"), rs.getString("notes"),
                 new Consent(rs.getInt("consent_measurement") == 1, rs.getInt("consent_photographs") == 1,
-                        rs.getInt("consent_share_with_parent") == 1));
+                        rs.getInt("consent_share_with_parent") == 1), Sql.nullableDouble(rs, "predicted_adult_stature_cm"));
     }
 }

@@ -92,4 +92,15 @@ class DemoAcademyFindingsTest {
         assertTrue(found >= inside * 0.7, found + " of " + inside + " spurts found");
         assertTrue(misses.isEmpty(), "ages at PHV within 0.5 years of the generating curve: " + misses);
     }
+
+    @Test
+    void aPredictedAdultStatureGivesThePercentReachedAndItsBand() {
+        Person p = builder.academy().people().stream().filter(x -> x.predictedAdultStatureCm() != null).findFirst()
+                .orElseThrow();
+        PersonHistory h = builder.history(p);
+        double stature = h.latest().orElseThrow().value(org.shapetrail.measure.Site.STATURE).orElseThrow();
+        // percent = stature / predicted × 100 (derived); bands < 85, 85–90, 90–95, > 95 % (common practice)
+        assertEquals(stature / p.predictedAdultStatureCm() * 100, h.growth().percentOfPredicted(), 1e-9);
+        assertEquals(org.shapetrail.growth.TargetHeight.Band.of(h.growth().percentOfPredicted()), h.growth().band());
+    }
 }

@@ -141,15 +141,20 @@ class DatabaseTest {
         }
     }
 
-    @Test
-    void aFileFromSchemaOneIsBackedUpThenMigratedKeepingItsData() throws Exception {
-        // fixture for schema version 1: the V1 script plus rows written as that version wrote them
-        Path f = dir.resolve("v1.sqlite");
+    @org.junit.jupiter.params.ParameterizedTest(name = "from schema {0}")
+    @org.junit.jupiter.params.provider.ValueSource(ints = {1, 2})
+    void aFileFromEveryEarlierSchemaIsBackedUpThenMigratedKeepingItsData(int version) throws Exception {
+        // fixture per earlier version: that version's scripts plus rows written as version 1 wrote them
+        // (versions 2 and 3 only added tables and a column)
+        assertTrue(version < Migrations.latest());
+        Path f = dir.resolve("v" + version + ".sqlite");
         try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + f); Statement s = c.createStatement()) {
-            for (String stmt : Migrations.statements(Migrations.script(1))) {
-                s.executeUpdate(stmt);
+            for (int v = 1; v <= version; v++) {
+                for (String stmt : Migrations.statements(Migrations.script(v))) {
+                    s.executeUpdate(stmt);
+                }
             }
-            s.executeUpdate("PRAGMA user_version = 1");
+            s.executeUpdate("PRAGMA user_version = " + version);
             for (String stmt : Migrations.statements(new String(
                     getClass().getResourceAsStream("fixture-v1.sql").readAllBytes(), "UTF-8"))) {
                 s.executeUpdate(stmt);
@@ -162,12 +167,13 @@ class DatabaseTest {
             List<Person> people = db.inTransaction(tx -> tx.people().all());
             assertEquals(List.of("Hesper Wellinghurst"), people.stream().map(Person::displayName).toList());
             assertEquals(Sex.MALE, people.get(0).sex());
+            assertEquals(null, people.get(0).predictedAdultStatureCm());
             List<Visit> visits = db.inTransaction(tx -> tx.visits().all());
             assertEquals(1, visits.size());
             assertEquals(List.of(150.1, 150.3), visits.get(0).trialsAt(Site.STATURE).orElseThrow().values());
             assertEquals(List.of(), db.inTransaction(tx -> tx.blocks().all()));
         }
-        try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + dir.resolve("v1.sqlite")); Statement s =
+        try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + f); Statement s =
                 c.createStatement(); var rs = s.executeQuery("PRAGMA user_version")) {
             rs.next();
             assertEquals(Migrations.latest(), rs.getInt(1));

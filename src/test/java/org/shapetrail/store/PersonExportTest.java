@@ -21,7 +21,7 @@ class PersonExportTest {
         try (Database db = Database.open(dir.resolve("x.sqlite"))) {
             String json = db.inTransaction(tx -> {
                 Person p = tx.people().insert(new Person(0, "Zoë \"Zo\" Quennell", Sex.FEMALE, LocalDate.of(2011, 2, 28),
-                        null, 165.5, "left-handed", new Consent(true, false, true)));
+                        null, 165.5, "left-handed", new Consent(true, false, true), null));
                 Squad s = tx.squads().insert("Rowing juniors");
                 tx.squads().addMember(new Membership(p.id(), s.id(), LocalDate.of(2024, 9, 1), null));
                 Measurer m = tx.measurers().insert("Ada Quarrington", "ISAK level 2");
@@ -39,6 +39,7 @@ class PersonExportTest {
                         "birthDate": "2011-02-28",
                         "fatherStatureCm": null,
                         "motherStatureCm": 165.5,
+                        "predictedAdultStatureCm": null,
                         "notes": "left-handed",
                         "consent": {
                           "measurement": true,

@@ -190,6 +190,10 @@ public final class DemoAcademy {
             boolean parents = rnd.nextDouble() < 0.6;
             Person p = Person.draft(jp.name(), jp.sex(), jp.birthDate())
                     .withConsent(new Consent(true, index % 9 == 0, true));
+            if (index % 4 == 2) {
+                // a predicted adult stature as a practitioner might enter it from another method
+                p = p.withPredictedAdultStature(round1(jp.growth().adultStatureCm() + 1.5));
+            }
             if (parents) {
                 double father = 179 + rnd.nextGaussian() * 6;
                 double mother = 165 + rnd.nextGaussian() * 6;
