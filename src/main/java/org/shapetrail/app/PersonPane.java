@@ -32,6 +32,7 @@ public final class PersonPane extends BorderPane {
     final Button deleteVisit = new Button("Delete visit…");
     final Button undo = new Button("Undo last change");
     final Button previewLetter = new Button("Preview letter…");
+    final Button editPerson = new Button("Edit person…");
 
     public PersonPane() {
         setId("person-page");
@@ -47,6 +48,7 @@ public final class PersonPane extends BorderPane {
         deleteVisit.setId("delete-visit");
         undo.setId("undo");
         previewLetter.setId("preview-letter");
+        editPerson.setId("edit-person");
         column("Date", VisitLine::date, 100);
         column("Age", VisitLine::age, 50);
         column("Measurer", VisitLine::measurer, 120);
@@ -60,7 +62,7 @@ public final class PersonPane extends BorderPane {
         visits.setPlaceholder(new Label("No visits yet"));
         editVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
         deleteVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
-        HBox actions = new HBox(8, newVisit, editVisit, deleteVisit, undo, previewLetter);
+        HBox actions = new HBox(8, newVisit, editVisit, deleteVisit, undo, previewLetter, editPerson);
         VBox head = new VBox(6, title, profile, latest, actions);
         head.setPadding(new Insets(10, 12, 8, 12));
         setTop(head);

@@ -156,12 +156,15 @@ public final class Workbench {
                 vm.selectedProperty().set(b);
             }
         });
+        Button newPerson = new Button("New person…");
+        newPerson.setId("new-person");
+        newPerson.setOnAction(e -> personForm(null));
         Label count = new Label();
         count.setId("people-count");
         vm.rows().addListener((javafx.collections.ListChangeListener<PersonRow>) c -> count.setText(
                 vm.rows().size() + " shown · click a column to sort (e.g. Growth for the fastest growing)"));
         HBox filters = new HBox(6, squad, age, maturity);
-        VBox left = new VBox(6, search, filters, rapid, people, count);
+        VBox left = new VBox(6, search, filters, new HBox(12, rapid, newPerson), people, count);
         left.setPadding(new Insets(8));
         VBox.setVgrow(people, Priority.ALWAYS);
 
@@ -169,6 +172,7 @@ public final class Workbench {
         person.onEditVisit(line -> editVisit(line));
         person.onDeleteVisit(line -> deleteVisit(line));
         person.undo.setOnAction(e -> undoLast());
+        person.editPerson.setOnAction(e -> vm.selectedHistory().ifPresent(h -> personForm(h.person())));
         person.previewLetter.setOnAction(e -> previewLetter(new org.shapetrail.letters.LetterSettings(
                 "Saltmarsh Bay Sports Academy", "the academy physiotherapist", "", "via the academy office",
                 LocalDate.now().minusYears(1), LocalDate.now(), false)));
@@ -283,18 +287,23 @@ public final class Workbench {
         Spinner<Double> mass = new Spinner<>(0.0, 3.0, AnalysisSettings.DEFAULT_MASS_DAY_TO_DAY_KG, 0.1);
         mass.setId("mass-variation");
         mass.setEditable(true);
+        CheckBox uncorrected = new CheckBox("Endomorphy from the skinfold sum without the height correction"
+                + " (170.18 / stature); the usual form has it");
+        uncorrected.setId("uncorrected-endomorphy");
         Button apply = new Button("Recompute with these settings");
         apply.setId("recompute");
         apply.setOnAction(e -> {
             AnalysisSettings s = vm.settings();
-            vm.recompute(new AnalysisSettings(s.endomorphy(), s.defaults(),
+            vm.recompute(new AnalysisSettings(uncorrected.isSelected()
+                    ? org.shapetrail.somatotype.EndomorphyVariant.UNCORRECTED
+                    : org.shapetrail.somatotype.EndomorphyVariant.HEIGHT_CORRECTED, s.defaults(),
                     new BiologicalVariation(java.util.Map.of(Site.BODY_MASS, mass.getValue())),
                     new GrowthAlert(threshold.getValue())));
         });
         VBox box = new VBox(10,
                 new Label("Rapid-growth alert above (cm per year; common practice 7)"), threshold,
                 new Label("Body mass day-to-day variation added to measurement error (kg; 0 to leave out)"), mass,
-                apply);
+                uncorrected, apply);
         box.setPadding(new Insets(12));
         return box;
     }
@@ -473,6 +482,15 @@ public final class Workbench {
                 folder.toPath(), (done, total) -> progress.update(done, total, "Letter " + done + " of " + total),
                 progress::isCancelled), files -> vm.statusProperty().set("Wrote " + Math.max(0, files.size() - 1)
                 + " letter(s) to " + folder), t -> vm.errorProperty().set(Errors.describe(t)));
+    }
+
+    private void personForm(org.shapetrail.store.Person editing) {
+        Loaded l = vm.loadedProperty().get();
+        if (l == null) {
+            return;
+        }
+        PersonFormView.show(new PersonFormViewModel(l.file(), l.builder().academy().squads(), locale, editing),
+                root.getScene().getWindow()).ifPresent(p -> vm.reload());
     }
 
     private void importFile() {
