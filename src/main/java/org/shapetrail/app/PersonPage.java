@@ -30,14 +30,17 @@ public record PersonPage(String title, List<String> profile, String latestChange
         profile.add(String.join(" · ", List.of(age, p.sex() == org.shapetrail.measure.Sex.FEMALE ? "female" : "male",
                 squad.isEmpty() ? "no current squad" : squad, "born " + p.birthDate().format(dates))));
         GrowthSummary g = h.growth();
-        g.velocity().ifPresent(v -> profile.add("Stature velocity " + Numbers.fmt(locale, v.perYear(), 1) + " ± "
+        boolean adult = h.latest().map(v -> v.ageYears() >= 18).orElse(false);
+        g.velocity().filter(v -> !adult).ifPresent(v -> profile.add("Stature velocity " + Numbers.fmt(locale, v.perYear(), 1) + " ± "
                 + Numbers.fmt(locale, v.sePerYear(), 1) + " cm/year over " + Numbers.fmt(locale, v.intervalYears(), 2)
                 + " years" + (g.rapidGrowth() ? " — RAPID GROWTH. " + GrowthAlert.CAUTION : "")));
         MaturityEstimate m = g.maturity();
         if (m != null) {
             profile.add("Maturity: " + m.summary() + ". " + MaturityEstimate.CAUTION);
         }
-        profile.add("Observed growth spurt: " + g.observedPhv().describe());
+        if (!adult) {
+            profile.add("Observed growth spurt: " + g.observedPhv().describe());
+        }
         if (g.midParentTargetCm() != null) {
             profile.add("Mid-parent target height " + Numbers.fmt(locale, g.midParentTargetCm(), 1) + " cm; "
                     + Numbers.fmt(locale, g.percentOfTarget(), 1) + " % reached (Tanner et al. 1970; a guide only)");

@@ -81,6 +81,10 @@ class WorkbenchGuiTest {
         Label latest = robot.lookup("#latest-change").queryAs(Label.class);
         assertTrue(latest.getText().contains("beyond noise"), latest.getText());
         snapshot(stage.getScene().getRoot(), "workbench-person.png");
+        robot.clickOn("#dark-theme");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(stage.getScene().getRoot().getStyleClass().contains("dark"));
+        snapshot(stage.getScene().getRoot(), "workbench-dark.png");
     }
 
     @Test
