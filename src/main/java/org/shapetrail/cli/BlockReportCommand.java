@@ -4,7 +4,6 @@ import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.shapetrail.groups.BlockResult;
-import org.shapetrail.groups.ComponentTest;
 import org.shapetrail.history.Academy;
 import org.shapetrail.history.AnalysisSettings;
 import org.shapetrail.history.BlockReview;
@@ -80,14 +79,8 @@ final class BlockReportCommand implements Callable<Integer> {
         BlockResult g = r.result();
         if (g != null) {
             out.println();
-            Table t = new Table("component", "mean_change", "t", "df", "p", "effect_size_dz", "effect_ci_low",
-                    "effect_ci_high");
-            for (ComponentTest c : g.components()) {
-                t.row(c.component().label(), Table.num(c.meanDifference(), 3), Table.num(c.t(), 2), Table.num(c.df(), 0),
-                        Table.num(c.pValue(), 4), Table.num(c.effectSize(), 2), Table.num(c.effectLow(), 2),
-                        Table.num(c.effectHigh(), 2));
-            }
-            t.write(out, output.format);
+            Table.componentTests(g.components(), 0, "component", "mean_change", "t", "df", "p", "effect_size_dz",
+                    "effect_ci_low", "effect_ci_high").write(out, output.format);
             out.println();
             Table s = new Table("measure", "value");
             s.row("athletes with both visits", g.n());

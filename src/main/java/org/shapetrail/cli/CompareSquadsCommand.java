@@ -5,7 +5,6 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
-import org.shapetrail.groups.ComponentTest;
 import org.shapetrail.groups.GroupComparison;
 import org.shapetrail.groups.GroupTests;
 import org.shapetrail.history.Academy;
@@ -54,14 +53,8 @@ final class CompareSquadsCommand implements Callable<Integer> {
             HistoryBuilder b = HistoryBuilder.of(a, AnalysisSettings.standard());
             c = GroupTests.compare(latest(a, b, first, day), latest(a, b, second, day));
         }
-        Table t = new Table("component", "difference_a_minus_b", "welch_t", "df", "p", "cohens_d", "d_ci_low",
-                "d_ci_high");
-        for (ComponentTest x : c.components()) {
-            t.row(x.component().label(), Table.num(x.meanDifference(), 3), Table.num(x.t(), 2), Table.num(x.df(), 1),
-                    Table.num(x.pValue(), 4), Table.num(x.effectSize(), 2), Table.num(x.effectLow(), 2),
-                    Table.num(x.effectHigh(), 2));
-        }
-        t.write(out, output.format);
+        Table.componentTests(c.components(), 1, "component", "difference_a_minus_b", "welch_t", "df", "p", "cohens_d",
+                "d_ci_low", "d_ci_high").write(out, output.format);
         out.println();
         Table s = new Table("measure", "value");
         s.row(first + ": n, mean, SAM", c.first().n() + ", " + c.first().meanRating().toDisplayString() + ", "

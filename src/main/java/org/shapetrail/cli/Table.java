@@ -27,6 +27,19 @@ final class Table {
         return this;
     }
 
+    /**
+     * The per-component tests as a table; {@code header} names the columns (they differ between paired and
+     * independent tests), {@code dfDecimals} 0 for whole degrees of freedom, 1 for Welch's.
+     */
+    static Table componentTests(List<org.shapetrail.groups.ComponentTest> tests, int dfDecimals, String... header) {
+        Table t = new Table(header);
+        for (org.shapetrail.groups.ComponentTest c : tests) {
+            t.row(c.component().label(), num(c.meanDifference(), 3), num(c.t(), 2), num(c.df(), dfDecimals),
+                    num(c.pValue(), 4), num(c.effectSize(), 2), num(c.effectLow(), 2), num(c.effectHigh(), 2));
+        }
+        return t;
+    }
+
     static String num(double v, int decimals) {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%." + decimals + "f", v) : "";
     }
