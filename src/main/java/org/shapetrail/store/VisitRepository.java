@@ -49,27 +49,38 @@ public final class VisitRepository {
             check(v);
         }
         List<Visit> saved = new ArrayList<>(visits.size());
-        try (PreparedStatement pv = c.prepareStatement("INSERT INTO visit (person_id, measured_at, measurer_id,"
-                + " context, notes, trial_count) VALUES (?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS);
+        // ids are given here rather than asked back per row: the transaction holds the write lock
+        // (BEGIN IMMEDIATE), so nobody else can take the next id meanwhile
+        long nextId;
+        try (PreparedStatement max = c.prepareStatement("SELECT coalesce(max(id), 0) FROM visit");
+             ResultSet rs = max.executeQuery()) {
+            rs.next();
+            nextId = rs.getLong(1) + 1;
+        }
+        try (PreparedStatement pv = c.prepareStatement("INSERT INTO visit (id, person_id, measured_at, measurer_id,"
+                + " context, notes, trial_count) VALUES (?, ?, ?, ?, ?, ?, ?)");
              PreparedStatement pt = c.prepareStatement(
                      "INSERT INTO trial (visit_id, site, trial_no, value, unit) VALUES (?, ?, ?, ?, ?)")) {
             int pending = 0;
             for (Visit v : visits) {
-                pv.setLong(1, v.personId());
-                pv.setString(2, v.measuredAt().format(TIME));
-                pv.setLong(3, v.measurerId());
-                pv.setString(4, v.context());
-                pv.setString(5, v.notes());
-                pv.setInt(6, v.trialCount());
-                pv.executeUpdate();
-                long id = Sql.generatedId(pv);
+                long id = nextId++;
+                pv.setLong(1, id);
+                pv.setLong(2, v.personId());
+                pv.setString(3, v.measuredAt().format(TIME));
+                pv.setLong(4, v.measurerId());
+                pv.setString(5, v.context());
+                pv.setString(6, v.notes());
+                pv.setInt(7, v.trialCount());
+                pv.addBatch();
                 pending += addTrials(pt, id, v.trials());
                 if (pending >= BATCH) {
+                    pv.executeBatch(); // visits before their trials, for the foreign key
                     pt.executeBatch();
                     pending = 0;
                 }
                 saved.add(v.withId(id));
             }
+            pv.executeBatch();
             if (pending > 0) {
                 pt.executeBatch();
             }
