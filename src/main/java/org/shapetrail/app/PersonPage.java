@@ -34,6 +34,12 @@ public record PersonPage(String title, List<String> profile, String latestChange
         g.velocity().filter(v -> !adult).ifPresent(v -> profile.add("Stature velocity " + Numbers.fmt(locale, v.perYear(), 1) + " ± "
                 + Numbers.fmt(locale, v.sePerYear(), 1) + " cm/year over " + Numbers.fmt(locale, v.intervalYears(), 2)
                 + " years" + (g.rapidGrowth() ? " — RAPID GROWTH. " + GrowthAlert.CAUTION : "")));
+        if (!adult && !g.otherVelocities().isEmpty()) {
+            List<String> parts = new ArrayList<>();
+            g.otherVelocities().forEach((what, v) -> parts.add(what + " " + Numbers.fmt(locale, v.perYear(), 1) + " ± "
+                    + Numbers.fmt(locale, v.sePerYear(), 1) + (what.equals("body mass") ? " kg" : " cm") + "/year"));
+            profile.add("Also: " + String.join("; ", parts));
+        }
         MaturityEstimate m = g.maturity();
         if (m != null) {
             profile.add("Maturity: " + m.summary() + ". " + MaturityEstimate.CAUTION);

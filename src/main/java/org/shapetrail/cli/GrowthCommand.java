@@ -35,6 +35,11 @@ final class GrowthCommand implements Callable<Integer> {
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
+    private static String other(GrowthSummary g, String what) {
+        Velocity v = g.otherVelocities().get(what);
+        return v == null ? "" : Table.num(v.perYear(), 1) + " ± " + Table.num(v.sePerYear(), 1);
+    }
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
@@ -47,11 +52,12 @@ final class GrowthCommand implements Callable<Integer> {
         Table t = new Table("id", "name", "age", "stature_cm", "velocity_cm_per_year", "velocity_se", "interval_years",
                 "rapid_growth", "maturity_status", "maturity_offset_years", "estimated_age_at_phv", "see_years",
                 "method", "observed_phv", "mid_parent_target_cm", "percent_of_target", "predicted_adult_cm",
-                "percent_of_predicted", "bio_band");
+                "percent_of_predicted", "bio_band", "sitting_height_cm_per_year", "leg_length_cm_per_year",
+                "mass_kg_per_year");
         for (PersonHistory h : histories) {
             if (h.visits().isEmpty()) {
                 t.row(h.person().id(), h.person().displayName(), "", "", "", "", "", "", "", "", "", "", "",
-                        "no visits", "", "", "", "", "");
+                        "no visits", "", "", "", "", "", "", "", "");
                 continue;
             }
             var last = h.latest().orElseThrow();
@@ -69,7 +75,8 @@ final class GrowthCommand implements Callable<Integer> {
                     g.percentOfTarget() == null ? "" : Table.num(g.percentOfTarget(), 1),
                     g.predictedAdultCm() == null ? "" : Table.num(g.predictedAdultCm(), 1),
                     g.percentOfPredicted() == null ? "" : Table.num(g.percentOfPredicted(), 1),
-                    g.band() == null ? "" : g.band().words());
+                    g.band() == null ? "" : g.band().words(), other(g, "sitting height"), other(g, "leg length"),
+                    other(g, "body mass"));
         }
         t.write(out, output.format);
         if (output.format == OutputFormat.TEXT) {

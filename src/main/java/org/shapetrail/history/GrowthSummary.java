@@ -19,7 +19,15 @@ import org.shapetrail.growth.Velocity;
  */
 public record GrowthSummary(Velocity latestVelocity, MaturityEstimate maturity, ObservedPhv.Result observedPhv,
                             Double midParentTargetCm, Double percentOfTarget, boolean rapidGrowth,
-                            Double predictedAdultCm, Double percentOfPredicted) {
+                            Double predictedAdultCm, Double percentOfPredicted,
+                            java.util.Map<String, Velocity> otherVelocities) {
+    /** Names of {@link #otherVelocities()}: sitting height, leg length (stature − sitting height), mass. */
+    public static final java.util.List<String> OTHER = java.util.List.of("sitting height", "leg length", "body mass");
+
+    public GrowthSummary {
+        otherVelocities = java.util.Map.copyOf(otherVelocities);
+    }
+
     /** The bio-banding band of the percent of predicted adult stature, or null. */
     public org.shapetrail.growth.TargetHeight.Band band() {
         return percentOfPredicted == null ? null : org.shapetrail.growth.TargetHeight.Band.of(percentOfPredicted);

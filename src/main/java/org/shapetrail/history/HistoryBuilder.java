@@ -160,7 +160,50 @@ public final class HistoryBuilder {
         boolean rapid = velocity != null && last(results).ageYears() < MAX_MATURITY_AGE
                 && settings.alert().raisedBy(velocity);
         return new GrowthSummary(velocity, maturity, phv, target, percent, rapid, p.predictedAdultStatureCm(),
-                predictedPercent);
+                predictedPercent, otherVelocities(results));
+    }
+
+    /**
+     * Velocities of sitting height, leg length and body mass from the latest visit back to the most recent
+     * one at least three months earlier that has them. Leg length = stature − sitting height; its SE
+     * combines both (independent errors).
+     */
+    private static java.util.Map<String, Velocity> otherVelocities(List<VisitResult> results) {
+        java.util.Map<String, Velocity> out = new java.util.LinkedHashMap<>();
+        java.util.function.Function<VisitResult, double[]> sh = r -> r.value(Site.SITTING_HEIGHT).map(v ->
+                new double[] {v, r.standardErrors().get(Site.SITTING_HEIGHT)}).orElse(null);
+        java.util.function.Function<VisitResult, double[]> leg = r -> {
+            Double st = r.finalValues().get(Site.STATURE);
+            Double s = r.finalValues().get(Site.SITTING_HEIGHT);
+            if (st == null || s == null) {
+                return null;
+            }
+            double a = r.standardErrors().get(Site.STATURE);
+            double b = r.standardErrors().get(Site.SITTING_HEIGHT);
+            return new double[] {st - s, Math.sqrt(a * a + b * b)};
+        };
+        java.util.function.Function<VisitResult, double[]> mass = r -> r.value(Site.BODY_MASS).map(v ->
+                new double[] {v, r.standardErrors().get(Site.BODY_MASS)}).orElse(null);
+        List<java.util.function.Function<VisitResult, double[]>> fs = List.of(sh, leg, mass);
+        for (int k = 0; k < fs.size(); k++) {
+            var f = fs.get(k);
+            List<VisitResult> with = results.stream().filter(r -> f.apply(r) != null).toList();
+            if (with.size() < 2) {
+                continue;
+            }
+            VisitResult last = with.get(with.size() - 1);
+            for (int i = with.size() - 2; i >= 0; i--) {
+                long days = ChronoUnit.DAYS.between(with.get(i).visit().measuredAt().toLocalDate(),
+                        last.visit().measuredAt().toLocalDate());
+                if (days >= Velocity.MIN_READABLE_DAYS) {
+                    double[] a = f.apply(with.get(i));
+                    double[] b = f.apply(last);
+                    out.put(GrowthSummary.OTHER.get(k), Velocity.between(a[0], a[1], b[0], b[1], days));
+                    break;
+                }
+            }
+        }
+        return out;
     }
 
     private static VisitResult last(List<VisitResult> results) {

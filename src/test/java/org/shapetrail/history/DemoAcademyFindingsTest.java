@@ -103,4 +103,15 @@ class DemoAcademyFindingsTest {
         assertEquals(stature / p.predictedAdultStatureCm() * 100, h.growth().percentOfPredicted(), 1e-9);
         assertEquals(org.shapetrail.growth.TargetHeight.Band.of(h.growth().percentOfPredicted()), h.growth().band());
     }
+
+    @Test
+    void legLengthVelocityIsStatureVelocityLessSittingHeightVelocity() {
+        // derived: leg length = stature − sitting height, both over the same interval here (every demo visit
+        // has both), so the velocities subtract
+        PersonHistory h = builder.history(byName("Zeb Thistlewood"));
+        var g = h.growth();
+        assertEquals(g.latestVelocity().perYear() - g.otherVelocities().get("sitting height").perYear(),
+                g.otherVelocities().get("leg length").perYear(), 1e-9);
+        assertTrue(g.otherVelocities().containsKey("body mass"));
+    }
 }
