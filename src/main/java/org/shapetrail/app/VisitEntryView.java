@@ -154,7 +154,9 @@ public final class VisitEntryView {
         VBox body = new VBox(10, head, grid, raterBox, live, verdict, new Label("To put right before saving:"),
                 problems, buttons);
         body.setPadding(new Insets(12));
-        BorderPane root = new BorderPane(new ScrollPane(body));
+        ScrollPane scroll = new ScrollPane(body);
+        scroll.setFitToWidth(true); // long verdict lines wrap instead of running off to the right
+        BorderPane root = new BorderPane(scroll);
         root.setId("visit-entry");
         Scene scene = new Scene(root, 980, 760);
         scene.getStylesheets().addAll(owner == null ? List.of() : owner.getScene().getStylesheets());
