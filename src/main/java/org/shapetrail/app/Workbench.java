@@ -178,16 +178,21 @@ public final class Workbench {
                 LocalDate.now().minusYears(1), LocalDate.now(), false)));
         person.undo.setDisable(true);
         personTab.setContent(person);
-        squadTab.setContent(squadPage());
-        measurersTab.setContent(measurersPage());
-        settingsTab.setContent(settingsPage());
+        // pages other than the person page are built when first opened: a faster start
+        squadTab.setContent(new Label("Opening…"));
+        measurersTab.setContent(new Label("Opening…"));
+        settingsTab.setContent(new Label("Opening…"));
         pages.getTabs().addAll(personTab, squadTab, measurersTab, settingsTab);
         pages.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         pages.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
             if (b == squadTab) {
+                ensureBuilt(squadTab);
                 fillSquadPage();
             } else if (b == measurersTab) {
+                ensureBuilt(measurersTab);
                 fillTem();
+            } else if (b == settingsTab) {
+                ensureBuilt(settingsTab);
             }
         });
         pages.setId("pages");
@@ -350,6 +355,14 @@ public final class Workbench {
             fillTem();
         }
         showPerson();
+    }
+
+    private final java.util.Set<Tab> built = new java.util.HashSet<>();
+
+    private void ensureBuilt(Tab t) {
+        if (built.add(t)) {
+            t.setContent(t == squadTab ? squadPage() : t == measurersTab ? measurersPage() : settingsPage());
+        }
     }
 
     private boolean squadStale = true;
