@@ -14,9 +14,7 @@ import javafx.scene.layout.StackPane;
 import javafx.scene.paint.Color;
 import javafx.scene.paint.PhongMaterial;
 import javafx.scene.shape.Cylinder;
-import javafx.scene.shape.MeshView;
 import javafx.scene.shape.Sphere;
-import javafx.scene.shape.TriangleMesh;
 import javafx.scene.transform.Rotate;
 import javafx.scene.transform.Translate;
 import org.shapetrail.somatotype.Rating;
@@ -88,13 +86,15 @@ public final class SomatotypeSpaceView extends StackPane {
         // axes from the origin to 8 on each component: endomorphy x, mesomorphy y (up), ectomorphy z
         world.getChildren().add(axis(new Point3D(8, 0, 0), Color.web("#a3472f")));
         world.getChildren().add(axis(new Point3D(0, 8, 0), Color.web("#1f6f78")));
-        world.getChildren().add(axis(new Point3D(0, 0, 8), Color.web("#c9822b")));
-        world.getChildren().add(plane());
+        world.getChildren().add(axis(new Point3D(0, 0, 8), Color.web("#3f5fa8")));
+        world.getChildren().addAll(label("endomorphy", Rating.of(8.6, 0, 0)), label("mesomorphy", Rating.of(0, 8.6, 0)),
+                label("ectomorphy", Rating.of(0, 0, 8.6)));
+        world.getChildren().addAll(plane());
         Point3D prev = null;
         for (int i = 0; i < ratings.size(); i++) {
             Rating r = ratings.get(i);
             Point3D p = pos(r);
-            Sphere s = new Sphere(i == ratings.size() - 1 ? 7 : 5);
+            Sphere s = new Sphere(i == ratings.size() - 1 ? 9 : 6);
             s.setMaterial(new PhongMaterial(i == ratings.size() - 1 ? Color.web("#1d3b44") : Color.web("#1f6f78")));
             s.getTransforms().add(new Translate(p.getX(), p.getY(), p.getZ()));
             world.getChildren().add(s);
@@ -103,6 +103,14 @@ public final class SomatotypeSpaceView extends StackPane {
             }
             prev = p;
         }
+    }
+
+    private static Node label(String text, Rating at) {
+        javafx.scene.text.Text t = new javafx.scene.text.Text(text);
+        t.setFill(Color.web("#1d3b44"));
+        Point3D p = pos(at);
+        t.getTransforms().add(new Translate(p.getX(), p.getY(), p.getZ()));
+        return t;
     }
 
     private static Point3D pos(Rating r) {
@@ -129,18 +137,13 @@ public final class SomatotypeSpaceView extends StackPane {
         return cyl;
     }
 
-    private static Node plane() {
+    /** The chart plane for orientation: the triangle through 7-1-1, 1-7-1 and 1-1-7, drawn as its edges. */
+    private static List<Node> plane() {
         Point3D a = pos(Rating.of(7, 1, 1));
         Point3D b = pos(Rating.of(1, 7, 1));
         Point3D c = pos(Rating.of(1, 1, 7));
-        TriangleMesh m = new TriangleMesh();
-        m.getPoints().addAll((float) a.getX(), (float) a.getY(), (float) a.getZ(), (float) b.getX(), (float) b.getY(),
-                (float) b.getZ(), (float) c.getX(), (float) c.getY(), (float) c.getZ());
-        m.getTexCoords().addAll(0, 0);
-        m.getFaces().addAll(0, 0, 1, 0, 2, 0, 0, 0, 2, 0, 1, 0);
-        MeshView v = new MeshView(m);
-        PhongMaterial mat = new PhongMaterial(Color.web("#8fb3b0", 0.35));
-        v.setMaterial(mat);
-        return v;
+        Color edge = Color.web("#8fb3b0");
+        return List.of(segment(a, b, edge, 0.8), segment(b, c, edge, 0.8), segment(c, a, edge, 0.8));
     }
+
 }
