@@ -27,6 +27,7 @@ public final class PersonPane extends BorderPane {
     private SomatotypeSpaceView space;
     private java.util.List<org.shapetrail.somatotype.Rating> spaceRatings = java.util.List.of();
     private final javafx.scene.control.TabPane views = new javafx.scene.control.TabPane();
+    private final SplitPane split;
     final Button newVisit = new Button("New visit…");
     final Button editVisit = new Button("Edit visit…");
     final Button deleteVisit = new Button("Delete visit…");
@@ -88,9 +89,13 @@ public final class PersonPane extends BorderPane {
         views.getTabs().addAll(somato, growthTab, spaceTab);
         views.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
         views.setId("person-views");
-        SplitPane split = new SplitPane(visits, views);
+        split = new SplitPane(visits, views);
         split.setDividerPositions(0.5);
-        setCenter(split);
+        // the table and charts join the scene with the first person shown: a lighter first frame
+        Label choose = new Label("Choose a person in the list to see their visits, verdicts and charts.");
+        choose.getStyleClass().add("hint");
+        choose.setPadding(new Insets(20));
+        setCenter(choose);
         chart.setMinSize(320, 320);
         VBox.setVgrow(split, Priority.ALWAYS);
         chart.setOnSelect(id -> {
@@ -111,6 +116,9 @@ public final class PersonPane extends BorderPane {
 
     /** Shows a person's history. */
     public void show(PersonHistory h, String squad, Locale locale) {
+        if (getCenter() != split) {
+            setCenter(split);
+        }
         PersonPage page = PersonPage.of(h, squad, locale);
         title.setText(page.title());
         profile.getChildren().clear();
