@@ -28,6 +28,9 @@ public final class PersonPane extends BorderPane {
     private java.util.List<org.shapetrail.somatotype.Rating> spaceRatings = java.util.List.of();
     private final javafx.scene.control.TabPane views = new javafx.scene.control.TabPane();
     private final SplitPane split;
+    private final javafx.scene.control.CheckBox regions = new javafx.scene.control.CheckBox("Show the category regions");
+    private PersonHistory shown;
+    private Locale shownLocale = Locale.getDefault();
     final Button newVisit = new Button("New visit…");
     final Button editVisit = new Button("Edit visit…");
     final Button deleteVisit = new Button("Delete visit…");
@@ -72,8 +75,14 @@ public final class PersonPane extends BorderPane {
         key.setId("chart-key");
         key.setWrapText(true);
         key.getStyleClass().add("hint");
+        regions.setId("category-regions");
+        regions.selectedProperty().addListener((o, a, b) -> {
+            if (shown != null) {
+                chart.setModel(org.shapetrail.chart.Charts.migration(shown, true, shownLocale, false, b));
+            }
+        });
         BorderPane chartBox = new BorderPane(chart);
-        chartBox.setBottom(key);
+        chartBox.setBottom(new VBox(2, key, regions));
         growth.setId("growth-chart");
         javafx.scene.control.Tab somato = new javafx.scene.control.Tab("Somatochart", chartBox);
         javafx.scene.control.Tab growthTab = new javafx.scene.control.Tab("Growth", growth);
@@ -136,7 +145,10 @@ public final class PersonPane extends BorderPane {
             case WITHIN_NOISE -> "within";
         }));
         visits.getItems().setAll(page.visits());
-        chart.setModel(page.chart());
+        shown = h;
+        shownLocale = locale;
+        chart.setModel(regions.isSelected() ? org.shapetrail.chart.Charts.migration(h, true, locale, false, true)
+                : page.chart());
         growth.setModel(org.shapetrail.chart.Charts.growth(h));
         spaceRatings = h.rated().stream().map(r -> r.somatotype().rating()).toList();
         if (space != null) {

@@ -35,6 +35,12 @@ public final class Charts {
 
     /** As above; {@code legend} false leaves the key out (the screen draws it beside the chart). */
     public static ChartModel migration(PersonHistory h, boolean ellipses, java.util.Locale locale, boolean legend) {
+        return migration(h, ellipses, locale, legend, false);
+    }
+
+    /** As above; {@code regions} adds the category regions. */
+    public static ChartModel migration(PersonHistory h, boolean ellipses, java.util.Locale locale, boolean legend,
+                                       boolean regions) {
         List<SomatochartBuilder.PathPoint> pts = new ArrayList<>();
         for (VisitResult r : h.rated()) {
             pts.add(new SomatochartBuilder.PathPoint(r.visit().measuredAt().toLocalDate(), r.somatotype().rating(),
@@ -44,6 +50,9 @@ public final class Charts {
         SomatochartBuilder b = new SomatochartBuilder(h.person().displayName(), locale);
         if (!legend) {
             b.withoutLegend();
+        }
+        if (regions) {
+            b.withCategoryRegions();
         }
         return b.path(h.person().displayName(), pts, verdicts, ellipses).buildAroundData(7);
     }

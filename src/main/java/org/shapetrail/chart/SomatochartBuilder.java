@@ -131,6 +131,86 @@ public final class SomatochartBuilder {
         frame.add(new Primitive.Text(new Point(0, 0.35), "4-4-4", 7, Anchor.MIDDLE, false, Palette.MUTED));
     }
 
+    /**
+     * Adds the category regions: the chart is divided where the category changes, each region named at its
+     * centre. Pairwise differences of the components depend only on the chart point (m − e = (Y + X)/2,
+     * m − c = (Y − X)/2, c − e = X), so every category but central is a region of the chart; central is
+     * drawn for ratings around 4-4-4 (sum 12), the level the chart's centre stands for.
+     */
+    public SomatochartBuilder withCategoryRegions() {
+        double step = 0.125;
+        int nx = (int) Math.round(16 / step);
+        int ny = (int) Math.round(26 / step);
+        org.shapetrail.somatotype.Category[][] cat = new org.shapetrail.somatotype.Category[nx + 1][ny + 1];
+        java.util.Map<org.shapetrail.somatotype.Category, double[]> sums = new java.util.EnumMap<>(
+                org.shapetrail.somatotype.Category.class);
+        List<Point> outline = outline(60);
+        for (int i = 0; i <= nx; i++) {
+            for (int j = 0; j <= ny; j++) {
+                double x = -8 + i * step;
+                double y = -13 + j * step;
+                if (!inside(outline, x, y)) {
+                    continue;
+                }
+                Rating r = ratingAt(x, y);
+                if (r == null) {
+                    continue;
+                }
+                cat[i][j] = org.shapetrail.somatotype.Categories.classify(r);
+                double[] acc = sums.computeIfAbsent(cat[i][j], k -> new double[3]);
+                acc[0] += x;
+                acc[1] += y;
+                acc[2]++;
+            }
+        }
+        Style edge = Style.dashed(Palette.FRAME, 0.6, 1, 2).withOpacity(0.8);
+        for (int i = 0; i < nx; i++) {
+            for (int j = 0; j < ny; j++) {
+                double x = -8 + i * step;
+                double y = -13 + j * step;
+                if (cat[i][j] != null && cat[i + 1][j] != null && cat[i][j] != cat[i + 1][j]) {
+                    frame.add(new Primitive.Segment(new Point(x + step / 2, y - step / 2), new Point(x + step / 2,
+                            y + step / 2), false, edge));
+                }
+                if (cat[i][j] != null && cat[i][j + 1] != null && cat[i][j] != cat[i][j + 1]) {
+                    frame.add(new Primitive.Segment(new Point(x - step / 2, y + step / 2), new Point(x + step / 2,
+                            y + step / 2), false, edge));
+                }
+            }
+        }
+        sums.forEach((c, acc) -> {
+            if (acc[2] >= 48) {
+                frame.add(new Primitive.Text(new Point(acc[0] / acc[2], acc[1] / acc[2]), c.displayName(), 6.5,
+                        Anchor.MIDDLE, false, Palette.FRAME));
+            }
+        });
+        return this;
+    }
+
+    /** The rating with chart point (x, y) and components summing to 12, or null when one would be below 0.5. */
+    static Rating ratingAt(double x, double y) {
+        // e + m + c = 12, c − e = x, 2m − e − c = y  ⇒  m = (12 + y)/3, e = (12 − m − x)/2, c = e + x
+        double m = (12 + y) / 3;
+        double e = (12 - m - x) / 2;
+        double c = e + x;
+        if (e < 0.5 || m < 0.5 || c < 0.5 || e > 12 || m > 12 || c > 12) {
+            return null;
+        }
+        return Rating.of(e, m, c);
+    }
+
+    private static boolean inside(List<Point> poly, double x, double y) {
+        boolean in = false;
+        for (int i = 0, j = poly.size() - 1; i < poly.size(); j = i++) {
+            Point a = poly.get(i);
+            Point b = poly.get(j);
+            if ((a.y() > y) != (b.y() > y) && x < (b.x() - a.x()) * (y - a.y()) / (b.y() - a.y()) + a.x()) {
+                in = !in;
+            }
+        }
+        return in;
+    }
+
     /** Leaves the key out of the model (the screen shows it beside the chart, at a fixed size). */
     public SomatochartBuilder withoutLegend() {
         legend = false;

@@ -106,6 +106,27 @@ class SomatochartModelTest {
     }
 
     @Test
+    void categoryRegionsAreNamedWhereTheirRatingsPlot() throws Exception {
+        ChartModel m = new SomatochartBuilder("regions", java.util.Locale.ENGLISH).withCategoryRegions().build();
+        List<String> names = m.texts().stream().map(Primitive.Text::text).toList();
+        for (String c : List.of("central", "balanced mesomorph", "balanced endomorph", "balanced ectomorph")) {
+            assertTrue(names.contains(c), c + " in " + names);
+        }
+        // the chart point (x, y) with components summing to 12: 2.5-7-2.5 plots at (0, 9) (derived)
+        Rating r = SomatochartBuilder.ratingAt(0, 9);
+        assertEquals(2.5, r.endomorphy(), 1e-12);
+        assertEquals(7.0, r.mesomorphy(), 1e-12);
+        assertEquals(2.5, r.ectomorphy(), 1e-12);
+        // "balanced mesomorph" is labelled above the centre, on the mesomorphy axis (derived from its ratings)
+        Primitive.Text bm = m.texts().stream().filter(t -> t.text().equals("balanced mesomorph")).findFirst().orElseThrow();
+        assertEquals(0, bm.at().x(), 0.3);
+        assertTrue(bm.at().y() > 3, "y " + bm.at().y());
+        java.awt.image.BufferedImage img = org.shapetrail.chart.png.PngRenderer.image(m, 520, 560, 2);
+        javax.imageio.ImageIO.write(img, "png", org.shapetrail.docs.Screenshots.folder()
+                .resolve("somatochart-categories.png").toFile());
+    }
+
+    @Test
     void noiseEllipseAxesFromTheChartCovariance() {
         // diag(4, 1) at k² = 1: semi-axes 2 and 1 along X (derived)
         double[] ax = Ellipses.axes(new double[][] {{4, 0}, {0, 1}}, 1);
