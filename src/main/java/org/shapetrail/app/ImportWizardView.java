@@ -19,7 +19,7 @@ import org.shapetrail.measure.DecimalStyle;
 final class ImportWizardView {
     private final Stage stage = new Stage();
 
-    ImportWizardView(ImportWizardViewModel vm, Window owner, Runnable afterImport) {
+    ImportWizardView(ImportWizardViewModel vm, TaskRunner runner, Window owner, Runnable afterImport) {
         stage.initOwner(owner);
         stage.setTitle("Bring in a spreadsheet");
         GridPane cols = new GridPane();
@@ -43,14 +43,11 @@ final class ImportWizardView {
                 : DecimalStyle.POINT));
         Button check = new Button("Check the file (nothing is written)");
         check.setId("import-check");
-        check.setOnAction(e -> vm.dryRun());
+        check.setOnAction(e -> vm.dryRun(runner));
         Button go = new Button("Import");
         go.setId("import-commit");
         go.disableProperty().bind(vm.canCommitProperty().not());
-        go.setOnAction(e -> {
-            vm.commit();
-            afterImport.run();
-        });
+        go.setOnAction(e -> vm.commit(runner, afterImport));
         Label summary = new Label();
         summary.setId("import-summary");
         summary.setWrapText(true);

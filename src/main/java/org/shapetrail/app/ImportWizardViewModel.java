@@ -109,17 +109,55 @@ public final class ImportWizardViewModel {
         report.clear();
     }
 
-    /** The dry run with the current mapping and options; nothing is written. */
-    public void dryRun() {
+    /** The dry run in the background (a large file takes seconds); the report appears when it is done. */
+    public void dryRun(TaskRunner runner) {
+        List<Column> cols = currentColumns();
+        ImportOptions o = new ImportOptions(decimals.get(), monthFirst.get(), createMissing.get());
+        summary.set("Checking " + file.getFileName() + " …");
+        runner.run("Checking the file", () -> {
+            try (Database db = Database.open(database)) {
+                return Importer.dryRun(file, Academy.load(db), o, cols);
+            }
+        }, this::showPlan, t -> summary.set(Errors.describe(t)));
+    }
+
+    /** Writes the checked import in the background, then calls {@code done}. */
+    public void commit(TaskRunner runner, Runnable done) {
+        ImportPlan p = plan.get();
+        if (p == null || !canCommit.get()) {
+            return;
+        }
+        canCommit.set(false);
+        summary.set("Importing …");
+        runner.run("Importing", () -> {
+            try (Database db = Database.open(database)) {
+                return Importer.commit(db, p);
+            }
+        }, n -> {
+            summary.set("Imported " + n + " visit(s).");
+            done.run();
+        }, t -> summary.set(Errors.describe(t)));
+    }
+
+    private List<Column> currentColumns() {
         List<Column> cols = new ArrayList<>();
         for (int i = 0; i < headers.size(); i++) {
             cols.add(mapping.get(i).get().column(headers.get(i)));
         }
+        return cols;
+    }
+
+    /** The dry run with the current mapping and options, on the calling thread; nothing is written. */
+    public void dryRun() {
         ImportPlan p;
         try (Database db = Database.open(database)) {
             p = Importer.dryRun(file, Academy.load(db),
-                    new ImportOptions(decimals.get(), monthFirst.get(), createMissing.get()), cols);
+                    new ImportOptions(decimals.get(), monthFirst.get(), createMissing.get()), currentColumns());
         }
+        showPlan(p);
+    }
+
+    private void showPlan(ImportPlan p) {
         plan.set(p);
         summary.set(p.summary());
         List<String> lines = new ArrayList<>();
@@ -133,20 +171,6 @@ public final class ImportWizardViewModel {
         }
         report.setAll(lines);
         canCommit.set(p.canCommit() && !p.visits().isEmpty());
-    }
-
-    /** Writes the checked import in one transaction; returns the number of visits. */
-    public int commit() {
-        ImportPlan p = plan.get();
-        if (p == null || !canCommit.get()) {
-            throw new IllegalStateException("run the check first; an import with rejected rows is never written");
-        }
-        try (Database db = Database.open(database)) {
-            int n = Importer.commit(db, p);
-            summary.set("Imported " + n + " visit(s).");
-            canCommit.set(false);
-            return n;
-        }
     }
 
     public List<String> headers() {

@@ -519,8 +519,8 @@ public final class Workbench {
             return;
         }
         try {
-            new ImportWizardView(new ImportWizardViewModel(l.file(), f.toPath()), root.getScene().getWindow(),
-                    vm::reload).show();
+            new ImportWizardView(new ImportWizardViewModel(l.file(), f.toPath()), vm.runner(),
+                    root.getScene().getWindow(), vm::reload).show();
         } catch (java.io.IOException | RuntimeException e) {
             vm.errorProperty().set("The file " + f.getName() + " cannot be read: " + Errors.describe(e));
         }

@@ -34,12 +34,15 @@ class ImportWizardViewModelTest {
                 vm.report().toString());
         vm.createMissingProperty().set(true);
         assertFalse(vm.canCommitProperty().get(), "a changed option asks for a new check");
-        vm.dryRun();
+        vm.dryRun(new DirectTaskRunner());
         assertTrue(vm.canCommitProperty().get(), vm.summaryProperty().get());
         try (Database d = Database.open(db)) {
             assertEquals(0, (int) d.inTransaction(tx -> tx.visits().count()), "the check wrote nothing");
         }
-        assertEquals(1, vm.commit());
+        boolean[] done = {false};
+        vm.commit(new DirectTaskRunner(), () -> done[0] = true);
+        assertTrue(done[0]);
+        assertEquals("Imported 1 visit(s).", vm.summaryProperty().get());
         try (Database d = Database.open(db)) {
             assertEquals(1, (int) d.inTransaction(tx -> tx.visits().count()));
         }
