@@ -68,26 +68,16 @@ public record BlockPage(String summary, List<String> athletes, List<String> left
         return new BlockPage(summary, athletes, left, chart.buildAroundData(8), profile);
     }
 
+    /** Sample SD of each component over the athletes, before or after (Commons Math). */
     private static double[] sds(BlockReview r, boolean before) {
         double[] sd = new double[3];
-        int n = r.athletes().size();
-        for (int j = 0; j < 3; j++) {
-            double m = 0;
-            for (BlockReview.Athlete a : r.athletes()) {
-                m += comp(before ? a.change().from() : a.change().to(), j);
-            }
-            m /= n;
-            double s = 0;
-            for (BlockReview.Athlete a : r.athletes()) {
-                double d = comp(before ? a.change().from() : a.change().to(), j) - m;
-                s += d * d;
-            }
-            sd[j] = n > 1 ? Math.sqrt(s / (n - 1)) : 0;
+        for (org.shapetrail.somatotype.Component c : org.shapetrail.somatotype.Component.values()) {
+            double[] v = r.athletes().stream().mapToDouble(a -> (before ? a.change().from() : a.change().to()).get(c))
+                    .toArray();
+            sd[c.ordinal()] = v.length > 1 ? new org.apache.commons.math3.stat.descriptive.moment.StandardDeviation()
+                    .evaluate(v) : 0;
         }
         return sd;
     }
 
-    private static double comp(org.shapetrail.somatotype.Rating r, int j) {
-        return j == 0 ? r.endomorphy() : j == 1 ? r.mesomorphy() : r.ectomorphy();
-    }
 }

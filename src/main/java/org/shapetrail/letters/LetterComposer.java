@@ -37,6 +37,8 @@ public final class LetterComposer {
             "Local safeguarding and data-protection rules apply to these records.");
 
     private final HistoryBuilder builder;
+    /** Histories of block members, computed once per composer (a squad's letters share them). */
+    private final java.util.Map<Long, PersonHistory> histories = new java.util.concurrent.ConcurrentHashMap<>();
     private final LetterSettings settings;
     private final Locale locale;
     private final DateTimeFormatter dates;
@@ -210,7 +212,7 @@ public final class LetterComposer {
             }
             var review = org.shapetrail.history.BlockReview.of(builder, block,
                     org.shapetrail.history.BlockReview.DEFAULT_WINDOW_DAYS, p -> p.id() == h.person().id() ? h
-                            : builder.history(p));
+                            : histories.computeIfAbsent(p.id(), id -> builder.history(p)));
             review.athletes().stream().filter(a -> a.person().id() == h.person().id()).findFirst().ifPresent(a -> {
                 String words = switch (a.change().verdict()) {
                     case BEYOND_NOISE -> "a change in body shape larger than measurement error";

@@ -74,7 +74,7 @@ class WorkbenchGuiTest {
     @Test
     void opensTheDemoAcademyWithEveryoneListedAndTheCaution(FxRobot robot) throws Exception {
         assertEquals("Shapetrail", robot.lookup("#app-title").queryAs(Label.class).getText());
-        assertEquals(60, people(robot).getItems().size());
+        assertEquals(60, /* the demo academy: 40 juniors + 20 seniors */ people(robot).getItems().size());
         assertTrue(robot.lookup("#caution").queryAs(Label.class).getText()
                 .startsWith("The somatotype describes present body shape."));
         select(robot, "Freya Breakwater");

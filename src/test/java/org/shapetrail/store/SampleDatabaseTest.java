@@ -47,6 +47,7 @@ class SampleDatabaseTest {
     void holdsFortyJuniorsAndTwentySeniorsWithTheirSquadsAndTheBlock() {
         try (Database db = Database.open(regenerated)) {
             List<Person> people = db.inTransaction(tx -> tx.people().all());
+            // issue text for the demo academy: about 40 juniors aged 10-17 and a senior squad of about 20
             assertEquals(60, people.size());
             LocalDate start = DemoAcademy.RECORD_START;
             long juniors = people.stream().filter(p -> ChronoUnit.YEARS.between(p.birthDate(), start) < 18).count();
@@ -59,7 +60,9 @@ class SampleDatabaseTest {
                     db.inTransaction(tx -> tx.squads().all()).stream().map(Squad::name).toList());
             List<TrainingBlock> blocks = db.inTransaction(tx -> tx.blocks().all());
             assertEquals(1, blocks.size());
+            // a 10-week block, first to last day: 10 × 7 − 1 = 69 days (derived)
             assertEquals(69, ChronoUnit.DAYS.between(blocks.get(0).startsOn(), blocks.get(0).endsOn()));
+            // two measurers with different repeatability (issue text)
             assertEquals(2, db.inTransaction(tx -> tx.measurers().all()).size());
         }
     }

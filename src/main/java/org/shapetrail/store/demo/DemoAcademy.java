@@ -14,6 +14,7 @@ import java.util.Map;
 import java.util.Random;
 import org.shapetrail.growth.PreeceBaines;
 import org.shapetrail.measure.RepeatRule;
+import org.shapetrail.measure.VisitCheck;
 import org.shapetrail.measure.Sex;
 import org.shapetrail.measure.Site;
 import org.shapetrail.measure.SiteKind;
@@ -248,7 +249,7 @@ public final class DemoAcademy {
         int rated = 0;
         for (Visit v : saved) {
             if ("block start".equals(v.context()) && rated < 6) {
-                Rating anthro = HeathCarter.rate(HeathCarterInput.fromFinalValues(finals(v))).rating();
+                Rating anthro = HeathCarter.rate(HeathCarterInput.fromFinalValues(VisitCheck.evaluate(v.trials()).finalValues())).rating();
                 Rating byEye = new Rating(half(anthro.endomorphy() + rnd.nextGaussian() * 0.4),
                         half(anthro.mesomorphy() + rnd.nextGaussian() * 0.4),
                         half(anthro.ectomorphy() + rnd.nextGaussian() * 0.4));
@@ -256,14 +257,6 @@ public final class DemoAcademy {
                 rated++;
             }
         }
-    }
-
-    private static Map<Site, Double> finals(Visit v) {
-        Map<Site, Double> m = new EnumMap<>(Site.class);
-        for (SiteTrials t : v.trials()) {
-            m.put(t.site(), RepeatRule.apply(t).value().orElseThrow());
-        }
-        return m;
     }
 
     private static double half(double v) {
