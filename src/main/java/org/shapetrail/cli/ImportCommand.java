@@ -53,7 +53,9 @@ final class ImportCommand implements Callable<Integer> {
         DecimalStyle d = decimalComma ? DecimalStyle.COMMA : decimalPoint ? DecimalStyle.POINT : null;
         ImportOptions o = new ImportOptions(d, monthFirst, createMissing);
         try (Database database = db.open()) {
-            ImportPlan plan = Importer.dryRun(file, Academy.load(database), o);
+            // with --commit the file is read, checked and written in one pass, rolled back on any rejection
+            ImportPlan plan = commit ? Importer.importFile(database, file, o, null)
+                    : Importer.dryRun(file, Academy.load(database), o);
             if (!plan.fileProblems().isEmpty()) {
                 spec.commandLine().getErr().println(plan.summary());
                 return 2;
@@ -75,8 +77,7 @@ final class ImportCommand implements Callable<Integer> {
                 out.println("Nothing was written: fix the rejected rows and run again.");
                 return 1;
             }
-            int n = Importer.commit(database, plan);
-            out.println("Imported " + n + " visit(s).");
+            out.println("Imported " + plan.written() + " visit(s).");
         }
         return 0;
     }

@@ -5,13 +5,11 @@ import org.shapetrail.store.Person;
 import org.shapetrail.store.Visit;
 
 /**
- * The dry run of an import: every row's outcome with its line number and reason, the visits that would
- * be written, and the people and measurers that would be created. Nothing has been written.
- *
- * @param fileProblems problems of the whole file (no header, missing columns); none means rows were read
+ * The outcome of reading an import: every row's outcome with its line number and reason, the visits that
+ * would be written, and the people and measurers that would be created. After a dry run nothing has been
+ * written; after {@link Importer#importFile} {@link #written()} says how many visits were.
  */
-public record ImportPlan(List<Column> columns, boolean longLayout, List<RowReport> rows, List<PlannedVisit> visits,
-                         List<Person> newPeople, List<String> newMeasurers, List<String> fileProblems) {
+public final class ImportPlan {
     /** What happens to one row. */
     public enum Outcome {
         IMPORTED("imported"),
@@ -40,17 +38,74 @@ public record ImportPlan(List<Column> columns, boolean longLayout, List<RowRepor
     public record PlannedVisit(long personId, int newPersonIndex, long measurerId, String newMeasurer, Visit visit) {
     }
 
-    public ImportPlan {
-        columns = List.copyOf(columns);
-        rows = List.copyOf(rows);
-        visits = List.copyOf(visits);
-        newPeople = List.copyOf(newPeople);
-        newMeasurers = List.copyOf(newMeasurers);
-        fileProblems = List.copyOf(fileProblems);
+    private final List<Column> columns;
+    private final boolean longLayout;
+    private final RowLog.Rows rows;
+    private final List<PlannedVisit> visits;
+    private final List<Person> newPeople;
+    private final List<String> newMeasurers;
+    private final List<String> fileProblems;
+    private final int written;
+
+    ImportPlan(List<Column> columns, boolean longLayout, RowLog.Rows rows, List<PlannedVisit> visits,
+               List<Person> newPeople, List<String> newMeasurers, List<String> fileProblems, int written) {
+        this.columns = List.copyOf(columns);
+        this.longLayout = longLayout;
+        this.rows = rows;
+        this.visits = List.copyOf(visits);
+        this.newPeople = List.copyOf(newPeople);
+        this.newMeasurers = List.copyOf(newMeasurers);
+        this.fileProblems = List.copyOf(fileProblems);
+        this.written = written;
+    }
+
+    static ImportPlan failed(List<Column> columns, boolean longLayout, List<String> fileProblems) {
+        return new ImportPlan(columns, longLayout, RowLog.Rows.NONE, List.of(), List.of(), List.of(), fileProblems, 0);
+    }
+
+    ImportPlan withWritten(int visitsWritten) {
+        return new ImportPlan(columns, longLayout, rows, visits, newPeople, newMeasurers, fileProblems, visitsWritten);
+    }
+
+    /** The column mapping used. */
+    public List<Column> columns() {
+        return columns;
+    }
+
+    /** True for a row per trial (a site column and a value column), false for a row per visit. */
+    public boolean longLayout() {
+        return longLayout;
+    }
+
+    /** Every data row in file order, with its outcome; made on demand, so a million rows cost little. */
+    public List<RowReport> rows() {
+        return rows;
+    }
+
+    public List<PlannedVisit> visits() {
+        return visits;
+    }
+
+    public List<Person> newPeople() {
+        return newPeople;
+    }
+
+    public List<String> newMeasurers() {
+        return newMeasurers;
+    }
+
+    /** Problems of the whole file (no header, missing columns); none means the rows were read. */
+    public List<String> fileProblems() {
+        return fileProblems;
+    }
+
+    /** Visits written by this import: 0 after a dry run or when nothing could be written. */
+    public int written() {
+        return written;
     }
 
     public long count(Outcome o) {
-        return rows.stream().filter(r -> r.outcome() == o).count();
+        return rows.count(o);
     }
 
     /** True when the import can be committed: the file was read and no row is rejected. */

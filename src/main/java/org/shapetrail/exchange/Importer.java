@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.MalformedInputException;
 import java.nio.file.Path;
+import java.sql.SQLException;
 import java.text.Normalizer;
 import java.time.LocalDate;
 import java.time.LocalDateTime;
@@ -13,14 +14,11 @@ import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.HashSet;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 import org.shapetrail.history.Academy;
 import org.shapetrail.measure.DecimalStyle;
 import org.shapetrail.measure.Problem;
@@ -33,7 +31,9 @@ import org.shapetrail.measure.VisitEvaluation;
 import org.shapetrail.store.Database;
 import org.shapetrail.store.Measurer;
 import org.shapetrail.store.Person;
+import org.shapetrail.store.Tx;
 import org.shapetrail.store.Visit;
+import org.shapetrail.store.VisitRepository;
 
 /**
  * Imports visits from CSV in two steps: a dry run that reads every row, matches people and measurers,
@@ -64,6 +64,55 @@ public final class Importer {
      * @param columns the mapping to use (one per header, in order), or null for the suggestion
      */
     public static ImportPlan dryRun(Path file, Academy existing, ImportOptions options, List<Column> columns) {
+        return read(file, existing, options, columns, null);
+    }
+
+    /**
+     * Reads, checks and writes in one pass and one transaction: trials are written while the file is still
+     * being read (on a second thread), and the transaction commits only when no row is rejected and every
+     * visit passes the core's check; otherwise it is rolled back and nothing is written. The report is the
+     * one a dry run gives; {@link ImportPlan#written()} says how many visits were written.
+     *
+     * @param columns the mapping to use (one per header, in order), or null for the suggestion
+     */
+    public static ImportPlan importFile(Database db, Path file, ImportOptions options, List<Column> columns) {
+        try {
+            return db.inTransaction(tx -> {
+                Academy existing = Academy.load(db);
+                VisitRepository.BulkWriter bulk = tx.visits().bulkWriter();
+                try (bulk; ImportStream stream = new ImportStream(bulk)) {
+                    ImportPlan plan = read(file, existing, options, columns, stream);
+                    boolean write = plan.canCommit() && !plan.visits().isEmpty();
+                    List<Visit> visits = plan.visits().stream().map(ImportPlan.PlannedVisit::visit).toList();
+                    if (write) {
+                        bulk.check(visits); // while the writer catches up
+                    }
+                    stream.drain();
+                    if (!write) {
+                        throw new NothingWritten(plan);
+                    }
+                    bulk.finish(visits);
+                    return plan.withWritten(plan.visits().size());
+                }
+            });
+        } catch (NothingWritten e) {
+            return e.plan;
+        }
+    }
+
+    /** Thrown inside the transaction to roll it back while keeping the report. */
+    private static final class NothingWritten extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+        private final transient ImportPlan plan;
+
+        NothingWritten(ImportPlan plan) {
+            super(null, null, false, false);
+            this.plan = plan;
+        }
+    }
+
+    private static ImportPlan read(Path file, Academy existing, ImportOptions options, List<Column> columns,
+                                   ImportStream stream) {
         CsvInput.Format format;
         try {
             format = CsvInput.detect(file);
@@ -73,8 +122,8 @@ public final class Importer {
             return failed(List.of(), "It cannot be read (" + e.getMessage() + ").");
         }
         DecimalStyle decimals = options.decimals() != null ? options.decimals() : format.decimals();
-        try (CSVParser parser = CsvInput.parser(file, format.delimiter())) {
-            List<String> headers = parser.getHeaderNames();
+        try (CsvRows rows = new CsvRows(file, format.delimiter())) {
+            List<String> headers = rows.header();
             if (headers.isEmpty()) {
                 return failed(List.of(), "It is empty: there is no header row.");
             }
@@ -82,7 +131,7 @@ public final class Importer {
             if (cols.size() != headers.size()) {
                 return failed(cols, "The mapping has " + cols.size() + " columns but the file has " + headers.size() + ".");
             }
-            return new Reading(existing, options, decimals, cols).read(parser);
+            return new Reading(existing, options, decimals, cols, stream).read(rows);
         } catch (MalformedInputException e) {
             return failed(List.of(), "It is not UTF-8 text; save it from the spreadsheet as CSV UTF-8.");
         } catch (IOException | UncheckedIOException | IllegalStateException | IllegalArgumentException e) {
@@ -91,11 +140,11 @@ public final class Importer {
     }
 
     private static ImportPlan failed(List<Column> cols, String why) {
-        return new ImportPlan(cols, false, List.of(), List.of(), List.of(), List.of(), List.of(why));
+        return ImportPlan.failed(cols, false, List.of(why));
     }
 
     /**
-     * Writes a plan that {@link ImportPlan#canCommit()} in one transaction.
+     * Writes a dry run's plan that {@link ImportPlan#canCommit()} in one transaction.
      *
      * @return the number of visits written
      * @throws IllegalStateException when the plan has rejected rows or file problems
@@ -104,25 +153,27 @@ public final class Importer {
         if (!plan.canCommit()) {
             throw new IllegalStateException("An import with rejected rows is never written: " + plan.summary());
         }
-        return db.inTransaction(tx -> {
-            Map<String, Long> measurers = new HashMap<>();
-            for (String m : plan.newMeasurers()) {
-                measurers.put(m, tx.measurers().insert(m, "").id());
-            }
-            List<Long> people = new ArrayList<>();
-            for (Person p : plan.newPeople()) {
-                people.add(tx.people().insert(p).id());
-            }
-            List<Visit> visits = new ArrayList<>(plan.visits().size());
-            for (ImportPlan.PlannedVisit pv : plan.visits()) {
-                long person = pv.personId() > 0 ? pv.personId() : people.get(pv.newPersonIndex());
-                long measurer = pv.newMeasurer() != null ? measurers.get(pv.newMeasurer()) : pv.measurerId();
-                Visit v = pv.visit();
-                visits.add(new Visit(0, person, v.measuredAt(), measurer, v.context(), v.notes(), v.trials()));
-            }
-            tx.visits().insertAll(visits);
-            return visits.size();
-        });
+        return db.inTransaction(tx -> tx.visits().insertAll(resolve(tx, plan)).size());
+    }
+
+    /** Creates the plan's new people and measurers and gives each visit its person's and measurer's ids. */
+    private static List<Visit> resolve(Tx tx, ImportPlan plan) throws SQLException {
+        Map<String, Long> measurers = new HashMap<>();
+        for (String m : plan.newMeasurers()) {
+            measurers.put(m, tx.measurers().insert(m, "").id());
+        }
+        List<Long> people = new ArrayList<>();
+        for (Person p : plan.newPeople()) {
+            people.add(tx.people().insert(p).id());
+        }
+        List<Visit> visits = new ArrayList<>(plan.visits().size());
+        for (ImportPlan.PlannedVisit pv : plan.visits()) {
+            long person = pv.personId() > 0 ? pv.personId() : people.get(pv.newPersonIndex());
+            long measurer = pv.newMeasurer() != null ? measurers.get(pv.newMeasurer()) : pv.measurerId();
+            Visit v = pv.visit();
+            visits.add(new Visit(0, person, v.measuredAt(), measurer, v.context(), v.notes(), v.trials()));
+        }
+        return visits;
     }
 
     private static final java.util.regex.Pattern MARKS = java.util.regex.Pattern.compile("\\p{M}");
@@ -135,11 +186,13 @@ public final class Importer {
 
     /** One pass over the rows. */
     private static final class Reading {
+        private static final Site[] SITES = Site.values();
         private final Academy existing;
         private final ImportOptions options;
         private final DecimalStyle decimals;
         private final List<Column> cols;
         private final boolean longLayout;
+        private final ImportStream stream;
         private final Map<String, Person> peopleByKey = new HashMap<>();
         private final Map<Long, Person> peopleById = new HashMap<>();
         private final Map<String, Measurer> measurersByName = new HashMap<>();
@@ -147,49 +200,181 @@ public final class Importer {
         private final List<Person> newPeople = new ArrayList<>();
         private final Map<String, Integer> newPeopleIndex = new HashMap<>();
         private final List<String> newMeasurers = new ArrayList<>();
-        private final List<ImportPlan.RowReport> reports = new ArrayList<>();
+        private final RowLog log = new RowLog();
         // a large file repeats the same names, dates and sites on every row: work each out once
         private final Map<String, String> folded = new HashMap<>();
         private final Map<String, Optional<Site>> sitesByText = new HashMap<>();
+        private final List<byte[]> siteBytes = new ArrayList<>();
+        private final List<Optional<Site>> sitesFound = new ArrayList<>();
         private final Map<String, Object> datesByText = new HashMap<>();
         private final Map<String, String> newMeasurerByFold = new HashMap<>();
         private final Map<String, LocalTime> timesByText = new HashMap<>();
         private final Map<Column.Role, Integer> index = new java.util.EnumMap<>(Column.Role.class);
+        /** Columns of the cells that say who, when and by whom. */
+        private final int[] keyColumns;
+        private final int[] siteColumns;
+        private final List<Pending> visits = new ArrayList<>();
 
-        /** A visit being gathered from rows. */
-        private final class Pending {
+        /** A visit's trials and every problem the core finds in them. */
+        private record Checked(List<SiteTrials> trials, List<String> problems) {
+        }
+
+        /** What an early check leaves: only its problems (usually none); the trials are made again at the end. */
+        private static final List<String> NO_PROBLEMS = List.of();
+
+        /** Where each site's trials go in a visit's values: the sites of a file get slots as they appear. */
+        private final int[] slotOfSite = new int[SITES.length];
+        private int usedSites;
+        private Pending current;
+
+        private static double[] noValues(int sites) {
+            double[] v = new double[Math.max(1, sites) * SiteTrials.MAX_TRIALS];
+            java.util.Arrays.fill(v, Double.NaN);
+            return v;
+        }
+
+        /** The reading moves to rows of {@code p}: the visit it leaves is checked now, while the writer works. */
+        private void enter(Pending p) {
+            if (p == current) {
+                return;
+            }
+            if (current != null) {
+                send(current);
+                if (current.checked == null && !current.reopened && current.problems == null) {
+                    List<String> found = check(current).problems();
+                    current.checked = found.isEmpty() ? NO_PROBLEMS : found;
+                }
+            }
+            if (p.checked != null) {
+                p.checked = null;
+                p.reopened = true;
+            }
+            current = p;
+        }
+
+        /** The sites in the order of their codes, which is the order of the trial table's key. */
+        static {
+            if (SITES.length * SiteTrials.MAX_TRIALS > Long.SIZE) {
+                throw new ExceptionInInitializerError("Pending.sent holds one bit per site and trial");
+            }
+        }
+
+        private static final Site[] SITES_BY_CODE = java.util.Arrays.stream(SITES)
+                .sorted(java.util.Comparator.comparing(Site::code)).toArray(Site[]::new);
+
+        /**
+         * Hands the visit's values not yet written to the writer, in the order of the trial table's key, so
+         * that SQLite appends them at the end of the table instead of splitting pages in its middle.
+         */
+        private void send(Pending p) {
+            if (stream == null || stream.stopped()) {
+                return;
+            }
+            if (!p.rowSent) {
+                stream.visit(p.index, p.personId, p.newIndex, p.measurer == null ? 0 : p.measurer.id(), p.newMeasurer,
+                        p.when, p.context, Long.bitCount(valuesMask(p)));
+                p.rowSent = true;
+            }
+            for (Site site : SITES_BY_CODE) {
+                int slot = slotOfSite[site.ordinal()] - 1;
+                if (slot < 0 || (slot + 1) * SiteTrials.MAX_TRIALS > p.values.length) {
+                    continue;
+                }
+                for (int t = 0; t < SiteTrials.MAX_TRIALS; t++) {
+                    int at = slot * SiteTrials.MAX_TRIALS + t;
+                    if (!Double.isNaN(p.values[at]) && (p.sent & (1L << at)) == 0) {
+                        stream.trial(p.index, site, t + 1, p.values[at]);
+                        p.sent |= 1L << at;
+                    }
+                }
+            }
+        }
+
+        /** One bit per value the visit holds, as in {@link Pending#sent}. */
+        private static long valuesMask(Pending p) {
+            long m = 0;
+            for (int at = 0; at < p.values.length; at++) {
+                if (!Double.isNaN(p.values[at])) {
+                    m |= 1L << at;
+                }
+            }
+            return m;
+        }
+
+        /** Who was measured, when and by whom, as one row says. */
+        private static final class Head {
             final long personId;
             final int newIndex;
             final Measurer measurer;
             final String newMeasurer;
             final LocalDateTime when;
             final String context;
-            final Map<Site, Double[]> trials = new LinkedHashMap<>();
-            final List<Long> lines = new ArrayList<>();
-            final List<String> problems = new ArrayList<>();
-            final long firstLine;
 
-            Pending(long personId, int newIndex, Measurer m, String newMeasurer, LocalDateTime when, String context,
-                    long line) {
+            Head(long personId, int newIndex, Measurer measurer, String newMeasurer, LocalDateTime when, String context) {
+                this.personId = personId;
+                this.newIndex = newIndex;
+                this.measurer = measurer;
+                this.newMeasurer = newMeasurer;
+                this.when = when;
+                this.context = context;
+            }
+        }
+
+        /** A visit being gathered from rows; {@code index} is its place in the plan. */
+        private final class Pending {
+            final int index;
+            final long personId;
+            final int newIndex;
+            final Measurer measurer;
+            final String newMeasurer;
+            final LocalDateTime when;
+            final String context;
+            /** Trial values by the file's site slot (slot × 3 + trial − 1); NaN where none was given. */
+            double[] values = noValues(usedSites);
+            /** Problems of its rows, found while reading: such a visit is rejected whatever comes later. */
+            List<String> problems;
+            /** The problems of its trials, found when the reading moved on to another visit; null until then. */
+            List<String> checked;
+            /** True when rows of it came after another visit's: it is checked once, at the end. */
+            boolean reopened;
+            /** The values already handed to the writer, one bit per place in {@link #values}. */
+            long sent;
+            /** True once the visit's row was handed to the writer. */
+            boolean rowSent;
+
+            Pending(int index, long personId, int newIndex, Measurer m, String newMeasurer, LocalDateTime when,
+                    String context) {
+                this.index = index;
                 this.personId = personId;
                 this.newIndex = newIndex;
                 this.measurer = m;
                 this.newMeasurer = newMeasurer;
                 this.when = when;
                 this.context = context;
-                this.firstLine = line;
+            }
+
+            void problem(String why) {
+                if (problems == null) {
+                    problems = new ArrayList<>(2);
+                }
+                problems.add(why);
+                rejected();
             }
         }
 
-        Reading(Academy existing, ImportOptions options, DecimalStyle decimals, List<Column> cols) {
+        Reading(Academy existing, ImportOptions options, DecimalStyle decimals, List<Column> cols, ImportStream stream) {
             this.existing = existing;
             this.options = options;
             this.decimals = decimals;
             this.cols = cols;
+            this.stream = stream;
             this.longLayout = cols.stream().anyMatch(c -> c.role() == Column.Role.SITE_NAME);
             for (int i = cols.size() - 1; i >= 0; i--) {
                 index.put(cols.get(i).role(), i);
             }
+            keyColumns = KEY_ROLES.stream().filter(index::containsKey).mapToInt(index::get).toArray();
+            siteColumns = java.util.stream.IntStream.range(0, cols.size())
+                    .filter(i -> cols.get(i).role() == Column.Role.SITE_VALUE).toArray();
             for (Person p : existing.people()) {
                 peopleById.put(p.id(), p);
                 peopleByKey.put(fold(p.displayName()) + "|" + p.birthDate(), p);
@@ -202,12 +387,26 @@ public final class Importer {
             }
         }
 
+        /** Something is rejected: the import will not be written, so streaming its trials can stop. */
+        private void rejected() {
+            if (stream != null) {
+                stream.stop();
+            }
+        }
+
+        private void ownRow(long line, ImportPlan.Outcome outcome, String reason) {
+            log.ownRow(line, outcome, reason);
+            if (outcome == ImportPlan.Outcome.REJECTED) {
+                rejected();
+            }
+        }
+
         private Optional<Column> col(Column.Role r) {
             Integer i = index.get(r);
             return i == null ? Optional.empty() : Optional.of(cols.get(i));
         }
 
-        private String cell(CSVRecord rec, Column.Role r) {
+        private String cell(CsvRows rec, Column.Role r) {
             Integer i = index.get(r);
             return i == null || i >= rec.size() ? "" : CsvSafety.untext(rec.get(i));
         }
@@ -216,7 +415,7 @@ public final class Importer {
             return folded.computeIfAbsent(s, Importer::fold);
         }
 
-        ImportPlan read(CSVParser parser) {
+        ImportPlan read(CsvRows rec) throws IOException {
             List<String> fileProblems = new ArrayList<>();
             boolean who = col(Column.Role.PERSON_ID).isPresent()
                     || (col(Column.Role.NAME).isPresent() && col(Column.Role.BIRTH_DATE).isPresent());
@@ -229,112 +428,189 @@ public final class Importer {
             if (col(Column.Role.MEASURER).isEmpty()) {
                 fileProblems.add("No column names the measurer.");
             }
-            boolean anySite = cols.stream().anyMatch(c -> c.role() == Column.Role.SITE_VALUE);
             if (longLayout && (col(Column.Role.VALUE).isEmpty())) {
                 fileProblems.add("A site column is mapped, but no value column.");
             }
-            if (!longLayout && !anySite) {
+            if (!longLayout && siteColumns.length == 0) {
                 fileProblems.add("No column holds a measurement (e.g. \"stature\", \"triceps 1\").");
             }
             if (!fileProblems.isEmpty()) {
-                return new ImportPlan(cols, longLayout, List.of(), List.of(), List.of(), List.of(), fileProblems);
+                return ImportPlan.failed(cols, longLayout, fileProblems);
             }
-            Map<String, Pending> pending = new LinkedHashMap<>();
+            Map<String, Pending> pending = new HashMap<>();
             Map<String, Pending> byRawKey = new HashMap<>();
             Map<String, Long> wideKeys = new HashMap<>();
-            for (CSVRecord rec : parser) {
-                long line = parser.getCurrentLineNumber();
+            // the previous row's key cells and where that row went: rows of one visit usually follow each other
+            Pending previous = null;
+            ImportPlan.RowReport previousOwn = null;
+            boolean havePrevious = false;
+            while (rec.next()) {
+                long line = rec.line();
                 if (rec.size() != cols.size()) {
-                    reports.add(new ImportPlan.RowReport(line, ImportPlan.Outcome.REJECTED, "the row has " + rec.size()
-                            + " cells but the header has " + cols.size() + "; check the delimiter and the quotes"));
+                    ownRow(line, ImportPlan.Outcome.REJECTED, "the row has " + rec.size()
+                            + " cells but the header has " + cols.size() + "; check the delimiter and the quotes");
+                    havePrevious = false;
                     continue;
                 }
-                // rows of one visit repeat the same who/when/by-whom cells: place them once
+                if (longLayout && havePrevious && rec.sameAsRemembered(keyColumns)) {
+                    if (previous != null) {
+                        log.visitRow(line, previous.index);
+                        enter(previous);
+                        values(rec, line, previous);
+                    } else {
+                        ownRow(line, previousOwn.outcome(), previousOwn.reason());
+                    }
+                    continue;
+                }
+                rec.remember(keyColumns);
+                havePrevious = true;
+                previous = null;
                 String rawKey = rawKey(rec);
-                Pending same = byRawKey.get(rawKey);
-                if (same != null && longLayout) {
-                    same.lines.add(line);
+                Pending same = longLayout ? byRawKey.get(rawKey) : null;
+                if (same != null) {
+                    previous = same;
+                    log.visitRow(line, same.index);
+                    enter(same);
                     values(rec, line, same);
                     continue;
                 }
                 List<String> why = new ArrayList<>(2);
-                Pending head = head(rec, line, why);
+                Head head = head(rec, why);
                 if (head == null) {
-                    reports.add(new ImportPlan.RowReport(line, ImportPlan.Outcome.REJECTED, String.join("; ", why)));
+                    previousOwn = new ImportPlan.RowReport(line, ImportPlan.Outcome.REJECTED, String.join("; ", why));
+                    ownRow(line, previousOwn.outcome(), previousOwn.reason());
                     continue;
                 }
                 String key = head.personId + "|" + head.newIndex + "|" + head.when + "|"
                         + (head.measurer != null ? head.measurer.id() : head.newMeasurer);
                 if (head.personId > 0 && head.measurer != null
                         && existingVisits.contains(head.personId + "|" + head.when + "|" + head.measurer.id())) {
-                    reports.add(new ImportPlan.RowReport(line, ImportPlan.Outcome.SKIPPED,
-                            "this visit is already in the file"));
+                    previousOwn = new ImportPlan.RowReport(line, ImportPlan.Outcome.SKIPPED,
+                            "this visit is already in the file");
+                    ownRow(line, previousOwn.outcome(), previousOwn.reason());
                     continue;
                 }
                 if (!longLayout) {
                     Long earlier = wideKeys.putIfAbsent(key, line);
                     if (earlier != null) {
-                        reports.add(new ImportPlan.RowReport(line, ImportPlan.Outcome.REJECTED,
-                                "the same visit as line " + earlier + " (person, date, time and measurer)"));
+                        ownRow(line, ImportPlan.Outcome.REJECTED,
+                                "the same visit as line " + earlier + " (person, date, time and measurer)");
                         continue;
                     }
                 }
-                Pending p = pending.computeIfAbsent(key, k -> head);
+                Pending p = pending.get(key);
+                if (p == null) {
+                    p = new Pending(visits.size(), head.personId, head.newIndex, head.measurer, head.newMeasurer,
+                            head.when, head.context);
+                    pending.put(key, p);
+                    visits.add(p);
+                }
                 byRawKey.put(rawKey, p);
-                p.lines.add(line);
+                previous = p;
+                log.visitRow(line, p.index);
+                enter(p);
                 values(rec, line, p);
             }
-            List<ImportPlan.PlannedVisit> visits = new ArrayList<>();
-            for (Pending p : pending.values()) {
-                List<SiteTrials> trials = new ArrayList<>();
-                p.trials.forEach((site, vals) -> {
-                    List<Double> v = new ArrayList<>();
-                    for (Double d : vals) {
-                        if (d != null) {
-                            v.add(d);
-                        }
-                    }
-                    if (!v.isEmpty()) {
-                        trials.add(new SiteTrials(site, v));
-                    }
-                });
-                VisitEvaluation ev = VisitCheck.evaluate(trials);
-                for (Problem pr : ev.problems()) {
-                    p.problems.add(pr.message());
-                }
-                if (trials.isEmpty() && p.problems.isEmpty()) {
-                    p.problems.add("no measurement in the row");
-                }
-                boolean ok = p.problems.isEmpty();
-                for (long l : p.lines) {
-                    reports.add(new ImportPlan.RowReport(l, ok ? ImportPlan.Outcome.IMPORTED : ImportPlan.Outcome.REJECTED,
-                            ok ? "" : String.join(" ", p.problems)));
-                }
-                if (ok) {
-                    visits.add(new ImportPlan.PlannedVisit(p.personId, p.newIndex,
-                            p.measurer == null ? 0 : p.measurer.id(), p.newMeasurer,
-                            new Visit(0, Math.max(0, p.personId), p.when, p.measurer == null ? 0 : p.measurer.id(),
-                                    p.context, "", trials)));
+            if (stream != null) {
+                for (Pending p : visits) {
+                    send(p); // the last visit, and those whose rows came apart
                 }
             }
-            reports.sort((a, b) -> Long.compare(a.line(), b.line()));
-            if (reports.isEmpty()) {
+            return finish(fileProblems);
+        }
+
+        /** Checks each gathered visit with the core and gives every row its outcome. */
+        private ImportPlan finish(List<String> fileProblems) {
+            List<ImportPlan.PlannedVisit> planned = new ArrayList<>(visits.size());
+            String[] reasons = new String[visits.size()];
+            for (Pending p : visits) {
+                if (p.problems == null) {
+                    Checked c = p.checked != null && p.checked.isEmpty() ? new Checked(trialsOf(p), NO_PROBLEMS)
+                            : p.checked != null ? new Checked(List.of(), p.checked) : check(p);
+                    if (!c.problems().isEmpty()) {
+                        c.problems().forEach(p::problem);
+                    } else {
+                        long measurerId = p.measurer == null ? 0 : p.measurer.id();
+                        planned.add(new ImportPlan.PlannedVisit(p.personId, p.newIndex, measurerId, p.newMeasurer,
+                                new Visit(0, Math.max(0, p.personId), p.when, measurerId, p.context, "", c.trials())));
+                    }
+                }
+                if (p.problems != null) {
+                    reasons[p.index] = String.join(" ", p.problems);
+                }
+            }
+            if (log.size() == 0) {
                 fileProblems.add("It has a header but no rows.");
             }
-            return new ImportPlan(cols, longLayout, reports, visits, newPeople, newMeasurers, fileProblems);
+            return new ImportPlan(cols, longLayout, log.resolve(reasons), planned, newPeople, newMeasurers,
+                    fileProblems, 0);
+        }
+
+        /** The visit's trials, checked by the core. */
+        private Checked check(Pending p) {
+            List<String> problems = new ArrayList<>(0);
+            List<SiteTrials> trials = trialsOf(p, problems);
+            if (problems.isEmpty()) {
+                for (Problem pr : VisitCheck.evaluate(trials).problems()) {
+                    problems.add(pr.message());
+                }
+                if (trials.isEmpty()) {
+                    problems.add("no measurement in the row");
+                }
+            }
+            return new Checked(trials, problems);
+        }
+
+        /** For a visit already checked without problems. */
+        private List<SiteTrials> trialsOf(Pending p) {
+            return trialsOf(p, new ArrayList<>(0));
+        }
+
+        /** The visit's trials by site, in the order of the sites; a gap in a site's trial numbers goes to {@code problems}. */
+        private List<SiteTrials> trialsOf(Pending p, List<String> problems) {
+            List<SiteTrials> trials = new ArrayList<>();
+            for (Site site : SITES) {
+                int slot = slotOfSite[site.ordinal()] - 1;
+                if (slot < 0 || (slot + 1) * SiteTrials.MAX_TRIALS > p.values.length) {
+                    continue;
+                }
+                int at = slot * SiteTrials.MAX_TRIALS;
+                List<Double> vs = null;
+                boolean gap = false;
+                for (int t = 0; t < SiteTrials.MAX_TRIALS; t++) {
+                    double v = p.values[at + t];
+                    if (Double.isNaN(v)) {
+                        continue;
+                    }
+                    if (vs == null) {
+                        vs = new ArrayList<>(SiteTrials.MAX_TRIALS);
+                    }
+                    if (vs.size() != t && !gap) {
+                        gap = true;
+                        problems.add(site.label() + " trial " + (t + 1) + " is given without trial " + (vs.size() + 1)
+                                + "; number a site's trials 1, 2, 3 in order.");
+                    }
+                    vs.add(v);
+                }
+                if (vs != null) {
+                    trials.add(new SiteTrials(site, vs));
+                }
+            }
+            return trials;
         }
 
         /** The cells that say who, when and by whom, joined: equal keys mean the same visit. */
-        private String rawKey(CSVRecord rec) {
+        private String rawKey(CsvRows rec) {
             StringBuilder sb = new StringBuilder(64);
             for (Column.Role r : KEY_ROLES) {
-                sb.append(cell(rec, r)).append('\u241f');
+                String c = cell(rec, r);
+                sb.append(c.length()).append(':').append(c); // length first: no two keys run together alike
             }
             return sb.toString();
         }
 
         /** Who, when and by whom; null (with the reasons) when the row cannot be placed. */
-        private Pending head(CSVRecord rec, long line, List<String> why) {
+        private Head head(CsvRows rec, List<String> why) {
             long personId = 0;
             int newIndex = -1;
             String idText = cell(rec, Column.Role.PERSON_ID);
@@ -369,6 +645,9 @@ public final class Importer {
                             try {
                                 Sex sex = Sex.ofCode(sexText.isEmpty() ? "?" : sexText.substring(0, 1));
                                 newPeople.add(Person.draft(CsvSafety.untext(name), sex, dob));
+                                if (stream != null) {
+                                    stream.person(newPeople.get(newPeople.size() - 1));
+                                }
                                 newIndex = newPeople.size() - 1;
                                 newPeopleIndex.put(key, newIndex);
                             } catch (IllegalArgumentException e) {
@@ -413,6 +692,9 @@ public final class Importer {
                     newM = newMeasurerByFold.get(f);
                     if (newM == null) {
                         newMeasurers.add(mName);
+                        if (stream != null) {
+                            stream.measurer(mName);
+                        }
                         newMeasurerByFold.put(f, mName);
                         newM = mName;
                     }
@@ -421,28 +703,32 @@ public final class Importer {
             if (!why.isEmpty()) {
                 return null;
             }
-            return new Pending(personId, newIndex, m, newM, LocalDateTime.of(day, time), cell(rec, Column.Role.CONTEXT),
-                    line);
+            return new Head(personId, newIndex, m, newM, LocalDateTime.of(day, time), cell(rec, Column.Role.CONTEXT));
         }
 
-        private void values(CSVRecord rec, long line, Pending p) {
+        private void values(CsvRows rec, long line, Pending p) {
             if (longLayout) {
-                String siteText = cell(rec, Column.Role.SITE_NAME);
-                Optional<Site> site = sitesByText.computeIfAbsent(siteText, ColumnMapper::siteNamed);
+                int siteColumn = index.get(Column.Role.SITE_NAME);
+                Optional<Site> site = siteIn(rec, siteColumn);
                 if (site.isEmpty()) {
-                    p.problems.add("line " + line + ": \"" + siteText + "\" is not a site Shapetrail knows");
+                    p.problem("line " + line + ": \"" + cell(rec, Column.Role.SITE_NAME)
+                            + "\" is not a site Shapetrail knows");
                     return;
                 }
                 int trial = 1;
-                String tt = cell(rec, Column.Role.TRIAL_NUMBER).strip();
-                if (!tt.isEmpty()) {
+                Integer trialColumn = index.get(Column.Role.TRIAL_NUMBER);
+                int digit = trialColumn == null ? -1 : rec.digit(trialColumn);
+                if (digit >= 1 && digit <= 3) {
+                    trial = digit;
+                } else if (trialColumn != null && !cell(rec, Column.Role.TRIAL_NUMBER).isBlank()) {
+                    String tt = cell(rec, Column.Role.TRIAL_NUMBER).strip();
                     try {
                         trial = Integer.parseInt(tt);
                     } catch (NumberFormatException e) {
                         trial = 0;
                     }
                     if (trial < 1 || trial > 3) {
-                        p.problems.add("line " + line + ": trial \"" + tt + "\" must be 1, 2 or 3");
+                        p.problem("line " + line + ": trial \"" + tt + "\" must be 1, 2 or 3");
                         return;
                     }
                 }
@@ -451,35 +737,66 @@ public final class Importer {
                 if (!ut.isEmpty()) {
                     unit = InputUnit.parse(ut).filter(u -> u.fits(site.get())).orElse(null);
                     if (unit == null) {
-                        p.problems.add("line " + line + ": unit \"" + ut + "\" does not fit " + site.get().label());
+                        p.problem("line " + line + ": unit \"" + ut + "\" does not fit " + site.get().label());
                         return;
                     }
                 }
-                put(p, site.get(), trial, cell(rec, Column.Role.VALUE), unit, line);
+                put(p, site.get(), trial, rec, index.get(Column.Role.VALUE), unit, line);
                 return;
             }
-            for (int i = 0; i < cols.size(); i++) {
+            for (int i : siteColumns) {
                 Column c = cols.get(i);
-                if (c.role() == Column.Role.SITE_VALUE && !rec.get(i).isBlank()) {
-                    put(p, c.site(), Math.max(1, c.trial()), rec.get(i), c.unit(), line);
+                if (!rec.get(i).isBlank()) {
+                    put(p, c.site(), Math.max(1, c.trial()), rec, i, c.unit(), line);
                 }
             }
         }
 
-        private void put(Pending p, Site site, int trial, String text, InputUnit unit, long line) {
-            ValueParser.Parsed v = ValueParser.parse(site, text, decimals);
-            if (!v.ok()) {
-                p.problems.add((longLayout ? "line " + line + ": " : "") + v.problem().message());
-                return;
+        /** The site a long-layout row names; the few site names of a file are matched by their bytes. */
+        private Optional<Site> siteIn(CsvRows rec, int column) {
+            for (int k = 0; k < siteBytes.size(); k++) {
+                if (rec.sameBytes(column, siteBytes.get(k))) {
+                    return sitesFound.get(k);
+                }
             }
-            double value = unit == null ? v.value() : unit.toSiteUnit(v.value(), site);
-            Double[] slots = p.trials.computeIfAbsent(site, s -> new Double[3]);
-            if (slots[trial - 1] != null) {
-                p.problems.add((longLayout ? "line " + line + ": " : "") + site.label() + " trial " + trial
+            Optional<Site> site = sitesByText.computeIfAbsent(CsvSafety.untext(rec.get(column)), ColumnMapper::siteNamed);
+            byte[] bytes = rec.bytes(column);
+            if (bytes != null && siteBytes.size() < 64) {
+                siteBytes.add(bytes);
+                sitesFound.add(site);
+            }
+            return site;
+        }
+
+        /** Reads the value in {@code column} and keeps it as the visit's trial; a plain decimal is read from bytes. */
+        private void put(Pending p, Site site, int trial, CsvRows rec, int column, InputUnit unit, long line) {
+            double read = rec.plainDecimal(column, decimals.separator());
+            if (Double.isNaN(read)) {
+                ValueParser.Parsed v = ValueParser.parse(site, CsvSafety.untext(rec.get(column)), decimals);
+                if (!v.ok()) {
+                    p.problem((longLayout ? "line " + line + ": " : "") + v.problem().message());
+                    return;
+                }
+                read = v.value();
+            }
+            double value = unit == null ? read : unit.toSiteUnit(read, site);
+            int slot = slotOfSite[site.ordinal()] - 1;
+            if (slot < 0) {
+                slot = usedSites++;
+                slotOfSite[site.ordinal()] = slot + 1;
+            }
+            if (p.values.length < (slot + 1) * SiteTrials.MAX_TRIALS) {
+                double[] more = noValues(usedSites);
+                System.arraycopy(p.values, 0, more, 0, p.values.length);
+                p.values = more;
+            }
+            int at = slot * SiteTrials.MAX_TRIALS + trial - 1;
+            if (!Double.isNaN(p.values[at])) {
+                p.problem((longLayout ? "line " + line + ": " : "") + site.label() + " trial " + trial
                         + " appears twice for this visit");
                 return;
             }
-            slots[trial - 1] = value;
+            p.values[at] = value;
         }
 
         private LocalDate date(String text, String what, List<String> why) {

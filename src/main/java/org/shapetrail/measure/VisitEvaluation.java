@@ -1,5 +1,6 @@
 package org.shapetrail.measure;
 
+import java.util.Collections;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
@@ -17,9 +18,24 @@ import java.util.Set;
 public record VisitEvaluation(Map<Site, Double> finalValues, Map<Site, RepeatOutcome> outcomes,
                               List<Problem> problems) {
     public VisitEvaluation {
-        finalValues = Map.copyOf(Objects.requireNonNull(finalValues));
-        outcomes = Map.copyOf(Objects.requireNonNull(outcomes));
+        finalValues = frozen(Objects.requireNonNull(finalValues));
+        outcomes = frozen(Objects.requireNonNull(outcomes));
         problems = List.copyOf(Objects.requireNonNull(problems));
+    }
+
+    /** An unmodifiable copy kept as an EnumMap: far cheaper than a general immutable map for a few sites. */
+    private static <V> Map<Site, V> frozen(Map<Site, V> m) {
+        EnumMap<Site, V> copy;
+        if (m instanceof EnumMap<Site, V> e) {
+            copy = e.clone();
+        } else {
+            copy = new EnumMap<>(Site.class);
+            copy.putAll(m);
+        }
+        if (copy.containsValue(null)) {
+            throw new NullPointerException("a site without a value");
+        }
+        return Collections.unmodifiableMap(copy);
     }
 
     /** True when the visit can be saved: no problem of any kind. */

@@ -4,6 +4,7 @@ import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
+import java.sql.Statement;
 import java.time.LocalDateTime;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
@@ -23,7 +24,6 @@ import org.shapetrail.somatotype.Rating;
  */
 public final class VisitRepository {
     static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd'T'HH:mm:ss");
-    private static final int BATCH = 5000;
     private final Connection c;
 
     VisitRepository(Connection c) {
@@ -40,67 +40,339 @@ public final class VisitRepository {
     }
 
     /**
-     * Checks every visit first, then saves them all with batched statements; used for bulk work such as
+     * Checks every visit first, then saves them all with multi-row statements; used for bulk work such as
      * imports and the demo database. Nothing is written if any visit is refused.
      */
     public List<Visit> insertAll(List<Visit> visits) throws SQLException {
         for (Visit v : visits) {
             check(v);
         }
+        long nextId = nextVisitId();
         List<Visit> saved = new ArrayList<>(visits.size());
-        // ids are given here rather than asked back per row: the transaction holds the write lock
-        // (BEGIN IMMEDIATE), so nobody else can take the next id meanwhile
-        long nextId;
-        try (PreparedStatement max = c.prepareStatement("SELECT coalesce(max(id), 0) FROM visit");
-             ResultSet rs = max.executeQuery()) {
-            rs.next();
-            nextId = rs.getLong(1) + 1;
+        for (Visit v : visits) {
+            saved.add(v.withId(nextId++));
         }
-        try (PreparedStatement pv = c.prepareStatement("INSERT INTO visit (id, person_id, measured_at, measurer_id,"
-                + " context, notes, trial_count) VALUES (?, ?, ?, ?, ?, ?, ?)");
-             PreparedStatement pt = c.prepareStatement(
-                     "INSERT INTO trial (visit_id, site, trial_no, value, unit) VALUES (?, ?, ?, ?, ?)")) {
-            int pending = 0;
-            for (Visit v : visits) {
-                long id = nextId++;
-                pv.setLong(1, id);
-                pv.setLong(2, v.personId());
-                pv.setString(3, v.measuredAt().format(TIME));
-                pv.setLong(4, v.measurerId());
-                pv.setString(5, v.context());
-                pv.setString(6, v.notes());
-                pv.setInt(7, v.trialCount());
-                pv.addBatch();
-                pending += addTrials(pt, id, v.trials());
-                if (pending >= BATCH) {
-                    pv.executeBatch(); // visits before their trials, for the foreign key
-                    pt.executeBatch();
-                    pending = 0;
-                }
-                saved.add(v.withId(id));
-            }
-            pv.executeBatch();
-            if (pending > 0) {
-                pt.executeBatch();
+        insertVisitRows(saved);
+        try (TrialWriter trials = new TrialWriter(c)) {
+            for (Visit v : saved) {
+                trials.addAll(v.id(), v.trials());
             }
         }
         return saved;
     }
 
-    private static int addTrials(PreparedStatement pt, long visitId, List<SiteTrials> trials) throws SQLException {
-        int n = 0;
-        for (SiteTrials t : trials) {
-            for (int i = 0; i < t.values().size(); i++) {
-                pt.setLong(1, visitId);
-                pt.setString(2, t.site().code());
-                pt.setInt(3, i + 1);
-                pt.setDouble(4, t.values().get(i));
-                pt.setString(5, t.site().unit().symbol());
-                pt.addBatch();
-                n++;
+    /**
+     * The next free visit id. Ids are given by the writer rather than asked back per row: a transaction
+     * holds the write lock (BEGIN IMMEDIATE), so nobody else can take the next id meanwhile.
+     */
+    private long nextVisitId() throws SQLException {
+        try (PreparedStatement max = c.prepareStatement("SELECT coalesce(max(id), 0) FROM visit");
+             ResultSet rs = max.executeQuery()) {
+            rs.next();
+            return rs.getLong(1) + 1;
+        }
+    }
+
+    private static final int VISIT_ROWS = 50;
+
+    /** Writes visit rows ({@value #VISIT_ROWS} per statement, the rest one by one). */
+    private void insertVisitRows(List<Visit> withIds) throws SQLException {
+        String insert = "INSERT INTO visit (id, person_id, measured_at, measurer_id, context, notes, trial_count) VALUES";
+        String row = " (?, ?, ?, ?, ?, ?, ?)";
+        try (PreparedStatement many = c.prepareStatement(insert + row + (", " + row).repeat(VISIT_ROWS - 1));
+             PreparedStatement one = c.prepareStatement(insert + row)) {
+            int whole = withIds.size() / VISIT_ROWS * VISIT_ROWS;
+            for (int i = 0; i < whole; i += VISIT_ROWS) {
+                for (int k = 0; k < VISIT_ROWS; k++) {
+                    bindVisit(many, k * 7, withIds.get(i + k));
+                }
+                many.executeUpdate();
+            }
+            for (int i = whole; i < withIds.size(); i++) {
+                bindVisit(one, 0, withIds.get(i));
+                one.addBatch();
+            }
+            if (whole < withIds.size()) {
+                one.executeBatch();
             }
         }
-        return n;
+    }
+
+    private static void bindVisit(PreparedStatement ps, int offset, Visit v) throws SQLException {
+        bindVisit(ps, offset, v, v.trialCount());
+    }
+
+    private static void bindVisit(PreparedStatement ps, int offset, Visit v, int trialCount) throws SQLException {
+        ps.setLong(offset + 1, v.id());
+        ps.setLong(offset + 2, v.personId());
+        ps.setString(offset + 3, v.measuredAt().format(TIME));
+        ps.setLong(offset + 4, v.measurerId());
+        ps.setString(offset + 5, v.context());
+        ps.setString(offset + 6, v.notes());
+        ps.setInt(offset + 7, trialCount);
+    }
+
+    /**
+     * Starts a bulk write of many visits in this transaction, for an import that writes while it reads. The
+     * caller gives each visit's row ({@link BulkWriter#visit}) before its trials ({@link BulkWriter#trial}),
+     * and new people and measurers before the visits that name them, so every foreign key holds as rows go
+     * in. {@link BulkWriter#finish} checks every visit with the core, that exactly the visits' trials were
+     * written and corrects the count of a visit whose trials came in more than one run; it throws otherwise,
+     * so that the transaction rolls back. The writing calls may come from another thread than check and
+     * finish, one after the other.
+     */
+    public BulkWriter bulkWriter() throws SQLException {
+        return new BulkWriter(nextVisitId());
+    }
+
+    /** See {@link #bulkWriter()}. */
+    public final class BulkWriter implements AutoCloseable {
+        private static final int VISITS_PER_STATEMENT = 50;
+        private final long firstId;
+        private final TrialWriter trials;
+        private final PreparedStatement[] visitStatements = new PreparedStatement[VISITS_PER_STATEMENT + 1];
+        private final List<Visit> unwritten = new ArrayList<>(VISITS_PER_STATEMENT);
+        private int[] trialsOf = new int[1024];
+        private int[] countWritten = new int[1024];
+        private int visits;
+        private List<List<SiteTrials>> checked;
+
+        private BulkWriter(long firstId) throws SQLException {
+            this.firstId = firstId;
+            this.trials = new TrialWriter(c, this::writeVisitRows);
+        }
+
+        /** The id of the first visit of this write; the i-th visit (from 0) gets firstId + i. */
+        public long firstId() {
+            return firstId;
+        }
+
+        /** Writes a new person; returns the id. */
+        public long person(Person draft) throws SQLException {
+            return new PersonRepository(c).insert(draft).id();
+        }
+
+        /** Writes a new measurer; returns the id. */
+        public long measurer(String name) throws SQLException {
+            return new MeasurerRepository(c).insert(name, "").id();
+        }
+
+        /**
+         * Writes the row of the next visit, id {@code firstId() + visits so far}, before any of its trials.
+         *
+         * @param trialCount the trials it has now; {@link #finish} corrects it if more come later
+         */
+        public void visit(long id, long personId, LocalDateTime measuredAt, long measurerId, String context,
+                          int trialCount) throws SQLException {
+            if (id != firstId + visits) {
+                throw new StoreException("Visit " + id + " is out of order in the bulk write; nothing was written.");
+            }
+            if (visits == countWritten.length) {
+                countWritten = java.util.Arrays.copyOf(countWritten, visits * 2);
+                trialsOf = java.util.Arrays.copyOf(trialsOf, visits * 2);
+            }
+            countWritten[visits++] = trialCount;
+            unwritten.add(new Visit(id, personId, measuredAt, measurerId, context, "", List.of()));
+            if (unwritten.size() == VISITS_PER_STATEMENT) {
+                writeVisitRows();
+            }
+        }
+
+        /** Writes one trial of a visit whose row was given. */
+        public void trial(long visitId, Site site, int trialNo, double value) throws SQLException {
+            long i = visitId - firstId;
+            if (i < 0 || i >= visits) {
+                throw new StoreException("A trial of visit " + visitId + " came before its visit; nothing was written.");
+            }
+            trialsOf[(int) i]++;
+            trials.add(visitId, site, trialNo, value);
+        }
+
+        /** The visit rows given so far, written before any trial statement runs (their foreign key). */
+        private void writeVisitRows() throws SQLException {
+            int n = unwritten.size();
+            if (n == 0) {
+                return;
+            }
+            PreparedStatement ps = visitStatements[n];
+            if (ps == null) {
+                String row = " (?, ?, ?, ?, ?, ?, ?)";
+                ps = c.prepareStatement("INSERT INTO visit (id, person_id, measured_at, measurer_id, context, notes,"
+                        + " trial_count) VALUES" + row + ("," + row).repeat(n - 1));
+                visitStatements[n] = ps;
+            }
+            for (int k = 0; k < n; k++) {
+                Visit v = unwritten.get(k);
+                bindVisit(ps, k * 7, v, countWritten[(int) (v.id() - firstId)]);
+            }
+            ps.executeUpdate();
+            unwritten.clear();
+        }
+
+        /**
+         * Checks every visit's trials with the core, without writing; may run while the writing goes on.
+         * {@link #finish} then checks again only visits whose trials are not the very lists checked here.
+         *
+         * @throws InvalidVisitException when a visit is refused
+         */
+        public void check(List<Visit> all) {
+            List<List<SiteTrials>> done = new ArrayList<>(all.size());
+            for (Visit v : all) {
+                VisitRepository.check(v);
+                done.add(v.trials());
+            }
+            checked = done;
+        }
+
+        /**
+         * Ends the write of {@code all}, the visits in the order of their ids: each checked with the core
+         * (unless {@link #check} was given its very trials), and exactly its trials written.
+         *
+         * @throws InvalidVisitException when a visit is refused; StoreException when what was written differs
+         */
+        public void finish(List<Visit> all) throws SQLException {
+            for (int i = 0; i < all.size(); i++) {
+                Visit v = all.get(i);
+                if (checked == null || i >= checked.size() || checked.get(i) != v.trials()) {
+                    VisitRepository.check(v);
+                }
+            }
+            writeVisitRows();
+            trials.flush();
+            if (all.size() != visits) {
+                throw new StoreException("The bulk write has " + visits + " visit rows for " + all.size()
+                        + " visits; nothing was written.");
+            }
+            try (PreparedStatement fix = c.prepareStatement("UPDATE visit SET trial_count = ? WHERE id = ?")) {
+                for (int i = 0; i < visits; i++) {
+                    int expected = all.get(i).trialCount();
+                    if (trialsOf[i] != expected) {
+                        throw new StoreException("Visit " + (firstId + i) + " has " + trialsOf[i] + " trials written but "
+                                + expected + " given; nothing was written.");
+                    }
+                    if (countWritten[i] != expected) {
+                        fix.setInt(1, expected);
+                        fix.setLong(2, firstId + i);
+                        fix.executeUpdate();
+                    }
+                }
+            }
+        }
+
+        @Override
+        public void close() throws SQLException {
+            try {
+                trials.close();
+            } finally {
+                for (PreparedStatement ps : visitStatements) {
+                    if (ps != null) {
+                        ps.close();
+                    }
+                }
+            }
+        }
+    }
+
+    /**
+     * Writes trial rows with one statement per {@value #ROWS} rows (far fewer calls into SQLite than one
+     * statement per row); the rest go one by one at {@link #flush}. A row binds the site's position in
+     * {@link Site} and SQL turns it into the site's code and unit, so that no text is bound per row.
+     */
+    private static final class TrialWriter implements AutoCloseable {
+        private static final int ROWS = 100;
+        private static final Site[] SITES = Site.values();
+        private final PreparedStatement many;
+        private final PreparedStatement one;
+        private final long[] visit = new long[ROWS];
+        private final int[] site = new int[ROWS];
+        private final int[] trialNo = new int[ROWS];
+        private final double[] value = new double[ROWS];
+        private int n;
+
+        /** Work that must run before any trial statement (the bulk writer's pending visit rows). */
+        interface BeforeWrite {
+            void run() throws SQLException;
+        }
+
+        private final BeforeWrite before;
+
+        TrialWriter(Connection c) throws SQLException {
+            this(c, () -> { });
+        }
+
+        TrialWriter(Connection c, BeforeWrite before) throws SQLException {
+            this.before = before;
+            many = c.prepareStatement(insert(ROWS));
+            one = c.prepareStatement(insert(1));
+        }
+
+        private static String insert(int rows) {
+            StringBuilder code = new StringBuilder("CASE column2");
+            StringBuilder unit = new StringBuilder("CASE column2");
+            for (Site s : SITES) {
+                code.append(" WHEN ").append(s.ordinal()).append(" THEN '").append(s.code()).append('\'');
+                unit.append(" WHEN ").append(s.ordinal()).append(" THEN '").append(s.unit().symbol()).append('\'');
+            }
+            StringBuilder sql = new StringBuilder("INSERT INTO trial (visit_id, site, trial_no, value, unit) SELECT"
+                    + " column1, ").append(code).append(" END, column3, column4, ").append(unit)
+                    .append(" END FROM (VALUES (?, ?, ?, ?)");
+            for (int i = 1; i < rows; i++) {
+                sql.append(", (?, ?, ?, ?)");
+            }
+            return sql.append(')').toString();
+        }
+
+        void addAll(long visitId, List<SiteTrials> trials) throws SQLException {
+            for (SiteTrials t : trials) {
+                for (int i = 0; i < t.values().size(); i++) {
+                    add(visitId, t.site(), i + 1, t.values().get(i));
+                }
+            }
+        }
+
+        void add(long visitId, Site s, int no, double v) throws SQLException {
+            visit[n] = visitId;
+            site[n] = s.ordinal();
+            trialNo[n] = no;
+            value[n] = v;
+            if (++n == ROWS) {
+                before.run();
+                for (int i = 0; i < ROWS; i++) {
+                    bind(many, i * 4, i);
+                }
+                many.executeUpdate();
+                n = 0;
+            }
+        }
+
+        private void bind(PreparedStatement ps, int offset, int i) throws SQLException {
+            ps.setLong(offset + 1, visit[i]);
+            ps.setInt(offset + 2, site[i]);
+            ps.setInt(offset + 3, trialNo[i]);
+            ps.setDouble(offset + 4, value[i]);
+        }
+
+        void flush() throws SQLException {
+            before.run();
+            for (int i = 0; i < n; i++) {
+                bind(one, 0, i);
+                one.addBatch();
+            }
+            if (n > 0) {
+                one.executeBatch();
+            }
+            n = 0;
+        }
+
+        @Override
+        public void close() throws SQLException {
+            try {
+                flush();
+            } finally {
+                many.close();
+                one.close();
+            }
+        }
     }
 
     private static void check(Visit v) {
@@ -130,10 +402,8 @@ public final class VisitRepository {
             del.setLong(1, v.id());
             del.executeUpdate();
         }
-        try (PreparedStatement pt = c.prepareStatement(
-                "INSERT INTO trial (visit_id, site, trial_no, value, unit) VALUES (?, ?, ?, ?, ?)")) {
-            addTrials(pt, v.id(), v.trials());
-            pt.executeBatch();
+        try (TrialWriter trials = new TrialWriter(c)) {
+            trials.addAll(v.id(), v.trials());
         }
     }
 
