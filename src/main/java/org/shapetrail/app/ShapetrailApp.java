@@ -114,10 +114,10 @@ public final class ShapetrailApp extends Application {
         if (Boolean.getBoolean("shapetrail.startupProbe")) {
             // for bench/cold-start.sh: report when the people list is on screen, then quit
             vm.loadedProperty().addListener((o, a, b) -> javafx.application.Platform.runLater(() -> {
-                long ms = System.currentTimeMillis()
-                        - java.lang.management.ManagementFactory.getRuntimeMXBean().getStartTime();
+                long now = System.currentTimeMillis();
+                long ms = now - java.lang.management.ManagementFactory.getRuntimeMXBean().getStartTime();
                 System.out.println("usable window with " + vm.rows().size() + " people after " + ms
-                        + " ms from JVM start");
+                        + " ms from JVM start, at " + now + " ms since 1970");
                 javafx.application.Platform.exit();
             }));
         }
