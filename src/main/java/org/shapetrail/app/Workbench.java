@@ -557,18 +557,12 @@ public final class Workbench {
     }
 
     private void editVisit(VisitLine line) {
-        stored(line).ifPresent(before -> {
+        stored(line).ifPresent(shown -> {
             Path file = vm.loadedProperty().get().file();
-            Optional<Visit> after = entryFor(before).showAndWait();
-            if (after.isPresent()) {
-                pushUndo("the edit of the visit of " + line.date(), () -> {
-                    try (Database db = Database.open(file)) {
-                        db.inTransaction(tx -> {
-                            tx.visits().update(before);
-                            return null;
-                        });
-                    }
-                });
+            Optional<VisitSnapshot> before = VisitSnapshot.read(file, shown.id());
+            Optional<Visit> after = entryFor(shown).showAndWait();
+            if (after.isPresent() && before.isPresent()) {
+                pushUndo("the edit of the visit of " + line.date(), () -> before.get().restoreEdited(file));
                 vm.reload();
             }
         });
@@ -584,14 +578,11 @@ public final class Workbench {
                 return;
             }
             Path file = vm.loadedProperty().get().file();
+            Optional<VisitSnapshot> before = VisitSnapshot.read(file, v.id());
             try (Database db = Database.open(file)) {
                 db.inTransaction(tx -> tx.visits().delete(v.id()));
             }
-            pushUndo("the deletion of the visit of " + line.date(), () -> {
-                try (Database db = Database.open(file)) {
-                    db.inTransaction(tx -> tx.visits().insert(v.withId(0)));
-                }
-            });
+            before.ifPresent(b -> pushUndo("the deletion of the visit of " + line.date(), () -> b.restoreDeleted(file)));
             vm.reload();
         });
     }

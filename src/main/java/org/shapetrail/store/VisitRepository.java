@@ -509,6 +509,19 @@ public final class VisitRepository {
         }
     }
 
+    /** Removes the rater's rating of a visit, if there is one. */
+    public void deleteRating(long visitId) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("DELETE FROM visit_rating WHERE visit_id = ?")) {
+            ps.setLong(1, visitId);
+            ps.executeUpdate();
+        }
+    }
+
+    /** The rater's rating of one visit, if any. */
+    public Optional<VisitRating> rating(long visitId) throws SQLException {
+        return Optional.ofNullable(ratings().get(visitId));
+    }
+
     /** Every rater's rating, keyed by visit id. */
     public Map<Long, VisitRating> ratings() throws SQLException {
         Map<Long, VisitRating> out = new LinkedHashMap<>();

@@ -1,0 +1,54 @@
+package org.shapetrail.app;
+
+import java.nio.file.Path;
+import java.util.Optional;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.Visit;
+import org.shapetrail.store.VisitRating;
+
+/**
+ * A visit as it was before an edit or a deletion, with its trials and the rater's rating, so that the
+ * change can be undone whole.
+ *
+ * @param rating the rater's rating at the time, or null when there was none
+ */
+record VisitSnapshot(Visit visit, VisitRating rating) {
+    /** The stored visit {@code visitId} with its rating, read in one transaction. */
+    static Optional<VisitSnapshot> read(Path file, long visitId) {
+        try (Database db = Database.open(file)) {
+            return db.inTransaction(tx -> {
+                Optional<Visit> v = tx.visits().find(visitId);
+                return v.isEmpty() ? Optional.<VisitSnapshot>empty()
+                        : Optional.of(new VisitSnapshot(v.get(), tx.visits().rating(visitId).orElse(null)));
+            });
+        }
+    }
+
+    /** Undoes an edit: the visit gets back its fields, trials and rating (or none), under the same id. */
+    void restoreEdited(Path file) {
+        try (Database db = Database.open(file)) {
+            db.inTransaction(tx -> {
+                tx.visits().update(visit);
+                if (rating == null) {
+                    tx.visits().deleteRating(visit.id());
+                } else {
+                    tx.visits().setRating(rating);
+                }
+                return null;
+            });
+        }
+    }
+
+    /** Undoes a deletion: the visit is saved again (under a new id) with its rating. */
+    Visit restoreDeleted(Path file) {
+        try (Database db = Database.open(file)) {
+            return db.inTransaction(tx -> {
+                Visit back = tx.visits().insert(visit.withId(0));
+                if (rating != null) {
+                    tx.visits().setRating(new VisitRating(back.id(), rating.rating(), rating.rater(), rating.method()));
+                }
+                return back;
+            });
+        }
+    }
+}
