@@ -44,6 +44,8 @@ public final class PersonFormViewModel {
     final ObservableList<Squad> squads = FXCollections.observableArrayList();
     final ObservableList<String> problems = FXCollections.observableArrayList();
     final BooleanProperty canSave = new SimpleBooleanProperty(false);
+    /** True while a save is being written (the view takes input away meanwhile). */
+    final BooleanProperty saving = new SimpleBooleanProperty(false);
 
     public PersonFormViewModel(Path file, List<Squad> squads, Locale locale, Person editing) {
         this.file = file;
@@ -136,17 +138,22 @@ public final class PersonFormViewModel {
             problems.setAll(c.problems());
             return Optional.empty();
         }
-        try (Database db = Database.open(file)) {
-            return Optional.of(db.inTransaction(tx -> {
-                if (editing == null) {
-                    Person saved = tx.people().insert(c.person());
-                    if (squad.get() != null) {
-                        tx.squads().addMember(new Membership(saved.id(), squad.get().id(), LocalDate.now(), null));
-                    }
-                    return saved;
+        Squad joins = squad.get();
+        try {
+            return Optional.of(OffFxThread.call(saving, () -> {
+                try (Database db = Database.open(file)) {
+                    return db.inTransaction(tx -> {
+                        if (editing == null) {
+                            Person saved = tx.people().insert(c.person());
+                            if (joins != null) {
+                                tx.squads().addMember(new Membership(saved.id(), joins.id(), LocalDate.now(), null));
+                            }
+                            return saved;
+                        }
+                        tx.people().update(c.person());
+                        return c.person();
+                    });
                 }
-                tx.people().update(c.person());
-                return c.person();
             }));
         } catch (RuntimeException e) {
             problems.setAll(List.of(Errors.describe(e)));

@@ -158,6 +158,7 @@ public final class VisitEntryView {
         scroll.setFitToWidth(true); // long verdict lines wrap instead of running off to the right
         BorderPane root = new BorderPane(scroll);
         root.setId("visit-entry");
+        root.disableProperty().bind(vm.savingProperty()); // no second Save while one is being written
         Scene scene = new Scene(root, 980, 760);
         scene.getStylesheets().addAll(owner == null ? List.of() : owner.getScene().getStylesheets());
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.S, KeyCombination.SHORTCUT_DOWN), this::save);

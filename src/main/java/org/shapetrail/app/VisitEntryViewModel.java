@@ -108,6 +108,7 @@ public final class VisitEntryViewModel {
     private final StringProperty raterComparison = new SimpleStringProperty("");
     private final ObservableList<String> problems = FXCollections.observableArrayList();
     private final BooleanProperty canSave = new SimpleBooleanProperty(false);
+    private final BooleanProperty saving = new SimpleBooleanProperty(false);
     private final ObservableList<Measurer> measurers = FXCollections.observableArrayList();
 
     /**
@@ -312,19 +313,25 @@ public final class VisitEntryViewModel {
         }
         Visit v = draft(trials);
         Rating rater = raterRating(new ArrayList<>());
-        try (Database db = Database.open(file)) {
-            Visit saved = db.inTransaction(tx -> {
-                Visit s;
-                if (editing == null) {
-                    s = tx.visits().insert(v);
-                } else {
-                    tx.visits().update(v);
-                    s = v;
+        String raterWho = raterName.get().strip();
+        RatingMethod method = raterMethod.get();
+        try {
+            Visit saved = OffFxThread.call(saving, () -> {
+                try (Database db = Database.open(file)) {
+                    return db.inTransaction(tx -> {
+                        Visit s;
+                        if (editing == null) {
+                            s = tx.visits().insert(v);
+                        } else {
+                            tx.visits().update(v);
+                            s = v;
+                        }
+                        if (rater != null) {
+                            tx.visits().setRating(new VisitRating(s.id(), rater, raterWho, method));
+                        }
+                        return s;
+                    });
                 }
-                if (rater != null) {
-                    tx.visits().setRating(new VisitRating(s.id(), rater, raterName.get().strip(), raterMethod.get()));
-                }
-                return s;
             });
             return Optional.of(saved);
         } catch (InvalidVisitException e) {
@@ -335,6 +342,11 @@ public final class VisitEntryViewModel {
             problems.setAll(List.of(Errors.describe(e)));
             return Optional.empty();
         }
+    }
+
+    /** True while a save is being written (the view takes input away meanwhile). */
+    public BooleanProperty savingProperty() {
+        return saving;
     }
 
     public List<SiteFields> fields() {

@@ -74,6 +74,8 @@ public final class Workbench {
     private final ToggleButton dark = new ToggleButton("Dark theme");
     /** Earlier versions of visits changed in this session, newest first, for undo. */
     private final Deque<Runnable> undo = new ArrayDeque<>();
+    /** True while a deletion or an undo is being written: the window takes no input meanwhile. */
+    private final javafx.beans.property.BooleanProperty storing = new javafx.beans.property.SimpleBooleanProperty();
 
     public Workbench(WorkbenchViewModel vm, Locale locale) {
         this.vm = vm;
@@ -82,6 +84,7 @@ public final class Workbench {
         root.getStyleClass().add("workbench");
         root.setTop(header());
         root.setCenter(body());
+        root.disableProperty().bind(storing);
         root.setBottom(footer());
         vm.loadedProperty().addListener((o, a, b) -> refreshPages());
         vm.selectedProperty().addListener((o, a, b) -> showPerson());
@@ -578,9 +581,18 @@ public final class Workbench {
                 return;
             }
             Path file = vm.loadedProperty().get().file();
-            Optional<VisitSnapshot> before = VisitSnapshot.read(file, v.id());
-            try (Database db = Database.open(file)) {
-                db.inTransaction(tx -> tx.visits().delete(v.id()));
+            Optional<VisitSnapshot> before;
+            try {
+                before = OffFxThread.call(storing, () -> {
+                    Optional<VisitSnapshot> snap = VisitSnapshot.read(file, v.id());
+                    try (Database db = Database.open(file)) {
+                        db.inTransaction(tx -> tx.visits().delete(v.id()));
+                    }
+                    return snap;
+                });
+            } catch (RuntimeException e) {
+                vm.errorProperty().set("The visit was not deleted: " + Errors.describe(e));
+                return;
             }
             before.ifPresent(b -> pushUndo("the deletion of the visit of " + line.date(), () -> b.restoreDeleted(file)));
             vm.reload();
@@ -596,7 +608,15 @@ public final class Workbench {
     private void undoLast() {
         Runnable r = undo.poll();
         if (r != null) {
-            r.run();
+            try {
+                OffFxThread.call(storing, () -> {
+                    r.run();
+                    return null;
+                });
+            } catch (RuntimeException e) {
+                undo.push(r); // still there to try again
+                vm.errorProperty().set("Nothing was undone: " + Errors.describe(e));
+            }
             vm.reload();
         }
         person.undo.setText("Undo last change");

@@ -96,6 +96,42 @@ class WorkbenchGuiTest {
     }
 
     @Test
+    void aSaveWhileAnotherProgramHoldsTheFileKeepsTheWindowAnswering(FxRobot robot) throws Exception {
+        select(robot, "Freya Breakwater");
+        VisitEntryView[] entry = new VisitEntryView[1];
+        robot.interact(() -> {
+            entry[0] = workbench.entryFor(null);
+            entry[0].show();
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn("#body_mass-1");
+        for (String[] pair : new String[][] {{"61.2", "61.2"}, {"168.4", "168.6"}}) {
+            robot.write(pair[0]).type(KeyCode.ENTER).write(pair[1]).type(KeyCode.ENTER);
+        }
+        WaitForAsyncUtils.waitForFxEvents();
+        // another program takes the write lock, as a second Shapetrail or a sync tool might
+        try (java.sql.Connection other = java.sql.DriverManager.getConnection("jdbc:sqlite:" + file)) {
+            other.createStatement().execute("BEGIN IMMEDIATE");
+            robot.press(KeyCode.CONTROL).type(KeyCode.S).release(KeyCode.CONTROL);
+            long t0 = System.nanoTime();
+            // the FX thread still runs events while the save waits for the file
+            assertEquals(Integer.valueOf(7), WaitForAsyncUtils.asyncFx(() -> 7).get(2, TimeUnit.SECONDS));
+            assertTrue(System.nanoTime() - t0 < 2_000_000_000L);
+            assertTrue(robot.lookup("#visit-entry").query().isDisabled(), "no second save meanwhile");
+            assertFalse(entry[0].saved().isPresent(), "not written while the other program holds the file");
+            other.createStatement().execute("ROLLBACK");
+        }
+        for (int i = 0; i < 100 && entry[0].saved().isEmpty(); i++) {
+            Thread.sleep(50);
+            WaitForAsyncUtils.waitForFxEvents();
+        }
+        assertTrue(entry[0].saved().isPresent(), "saved once the file was free");
+        try (Database db = Database.open(file)) {
+            assertTrue(db.inTransaction(tx -> tx.visits().find(entry[0].saved().get().id())).isPresent());
+        }
+    }
+
+    @Test
     void aCompleteVisitEnteredByKeyboardAloneIsSavedShownAndStored(FxRobot robot) throws Exception {
         select(robot, "Freya Breakwater");
         int before = robot.lookup("#visits").queryAs(TableView.class).getItems().size();
