@@ -10,7 +10,6 @@ import javafx.scene.control.SplitPane;
 import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
 import javafx.scene.layout.BorderPane;
-import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import org.shapetrail.chart.fx.ChartCanvas;
@@ -37,6 +36,7 @@ public final class PersonPane extends BorderPane {
     final Button undo = new Button("Undo last change");
     final Button previewLetter = new Button("Preview letter…");
     final Button editPerson = new Button("Edit person…");
+    final Button moveSquad = new Button("Move to squad…");
 
     public PersonPane() {
         setId("person-page");
@@ -53,6 +53,7 @@ public final class PersonPane extends BorderPane {
         undo.setId("undo");
         previewLetter.setId("preview-letter");
         editPerson.setId("edit-person");
+        moveSquad.setId("move-squad");
         column("Date", VisitLine::date, 100);
         column("Age", VisitLine::age, 50);
         column("Measurer", VisitLine::measurer, 120);
@@ -66,7 +67,15 @@ public final class PersonPane extends BorderPane {
         visits.setPlaceholder(new Label("No visits yet"));
         editVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
         deleteVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
-        HBox actions = new HBox(8, newVisit, editVisit, deleteVisit, undo, previewLetter, editPerson);
+        // the buttons wrap onto a second row rather than lose their words when the page is narrow
+        javafx.scene.layout.FlowPane actions = new javafx.scene.layout.FlowPane(8, 6, newVisit, editVisit, deleteVisit,
+                undo, new javafx.scene.control.Separator(javafx.geometry.Orientation.VERTICAL), previewLetter, editPerson,
+                moveSquad);
+        actions.getChildren().forEach(n -> {
+            if (n instanceof Button b) {
+                b.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+            }
+        });
         VBox head = new VBox(6, title, profile, latest, actions);
         head.setPadding(new Insets(10, 12, 8, 12));
         setTop(head);

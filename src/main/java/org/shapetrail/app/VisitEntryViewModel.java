@@ -213,7 +213,9 @@ public final class VisitEntryViewModel {
             found.add(new Problem(null, ProblemKind.MISSING, "Enter at least one site."));
         }
         if (measurer.get() == null) {
-            found.add(new Problem(null, ProblemKind.MISSING, "Choose who measured."));
+            found.add(new Problem(null, ProblemKind.MISSING, measurers.isEmpty()
+                    ? "This file has no measurers yet: add one on the Measurers page (Add measurer…), then enter the visit."
+                    : "Choose who measured."));
         }
         if (date.get() == null) {
             found.add(new Problem(null, ProblemKind.MISSING, "Enter the date of the visit."));

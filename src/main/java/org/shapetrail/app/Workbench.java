@@ -176,6 +176,7 @@ public final class Workbench {
         person.onDeleteVisit(line -> deleteVisit(line));
         person.undo.setOnAction(e -> undoLast());
         person.editPerson.setOnAction(e -> vm.selectedHistory().ifPresent(h -> personForm(h.person())));
+        person.moveSquad.setOnAction(e -> vm.selectedHistory().ifPresent(h -> moveToSquad(h.person())));
         person.previewLetter.setOnAction(e -> previewLetter(new org.shapetrail.letters.LetterSettings(
                 "Saltmarsh Bay Sports Academy", "the academy physiotherapist", "", "via the academy office",
                 LocalDate.now().minusYears(1), LocalDate.now(), false)));
@@ -219,7 +220,11 @@ public final class Workbench {
         Button letters = new Button("Write letters for this squad…");
         letters.setId("write-letters");
         letters.setOnAction(e -> writeLetters());
-        VBox head = new VBox(6, new HBox(8, squadChoice, letters), squadSummary, new Label("Training blocks"),
+        Button newSquad = new Button("New squad…");
+        newSquad.setId("new-squad");
+        newSquad.setOnAction(e -> askAndOrganise("New squad", "Name of the squad (e.g. Under-15 girls)",
+                (file, name) -> Organising.addSquad(file, name)));
+        VBox head = new VBox(6, new HBox(8, squadChoice, letters, newSquad), squadSummary, new Label("Training blocks"),
                 squadBlocks);
         head.setPadding(new Insets(10, 12, 8, 12));
         BorderPane members = new BorderPane();
@@ -275,10 +280,84 @@ public final class Workbench {
                 + " skinfolds ≤ 5 % (≤ 7.5 % entry level), other measures ≤ 1 % (≤ 1.5 %); common practice."
                 + " Below " + org.shapetrail.noise.DefaultErrors.MIN_PEOPLE + " people a site uses the default TEM.");
         note.setWrapText(true);
-        VBox box = new VBox(8, note, tem);
+        Button add = new Button("Add measurer…");
+        add.setId("add-measurer");
+        add.setOnAction(e -> askAndOrganise("Add measurer", "Name of the measurer (as visits will show it)",
+                (file, name) -> Organising.addMeasurer(file, name, "")));
+        measurerList.setId("measurer-list");
+        measurerList.setWrapText(true);
+        VBox box = new VBox(8, new HBox(8, add, measurerList), note, tem);
         box.setPadding(new Insets(10));
         VBox.setVgrow(tem, Priority.ALWAYS);
         return box;
+    }
+
+    private final Label measurerList = new Label();
+
+    /** Asks for one name, then makes the organising change off the FX thread; a refusal is shown as it is. */
+    private void askAndOrganise(String title, String prompt,
+                                java.util.function.BiFunction<Path, String, Optional<String>> change) {
+        Loaded l = vm.loadedProperty().get();
+        if (l == null) {
+            return;
+        }
+        javafx.scene.control.TextInputDialog d = new javafx.scene.control.TextInputDialog();
+        d.setTitle(title);
+        d.setHeaderText(prompt);
+        d.initOwner(root.getScene().getWindow());
+        d.showAndWait().ifPresent(name -> organise(() -> change.apply(l.file(), name)));
+    }
+
+    private void organise(java.util.function.Supplier<Optional<String>> change) {
+        Optional<String> refused;
+        try {
+            refused = OffFxThread.call(storing, change::get);
+        } catch (RuntimeException e) {
+            refused = Optional.of(Errors.describe(e));
+        }
+        if (refused.isPresent()) {
+            vm.errorProperty().set(refused.get());
+        } else {
+            vm.errorProperty().set("");
+            vm.reload();
+        }
+    }
+
+    private void moveToSquad(org.shapetrail.store.Person p) {
+        Loaded l = vm.loadedProperty().get();
+        if (l == null) {
+            return;
+        }
+        javafx.scene.control.Dialog<ButtonType> d = new javafx.scene.control.Dialog<>();
+        d.setTitle("Move to squad");
+        d.setHeaderText(p.displayName() + " moves to another squad; the current membership ends the day before.");
+        d.initOwner(root.getScene().getWindow());
+        ComboBox<org.shapetrail.store.Squad> to = new ComboBox<>(javafx.collections.FXCollections.observableArrayList(
+                l.builder().academy().squads()));
+        to.setId("move-to-squad");
+        to.setConverter(new javafx.util.StringConverter<>() {
+            @Override
+            public String toString(org.shapetrail.store.Squad s) {
+                return s == null ? "" : s.name();
+            }
+
+            @Override
+            public org.shapetrail.store.Squad fromString(String s) {
+                return null;
+            }
+        });
+        javafx.scene.control.DatePicker from = new javafx.scene.control.DatePicker(java.time.LocalDate.now());
+        from.setId("move-from");
+        javafx.scene.layout.GridPane g = new javafx.scene.layout.GridPane();
+        g.setHgap(8);
+        g.setVgap(8);
+        g.addRow(0, new Label("Squad"), to);
+        g.addRow(1, new Label("From"), from);
+        d.getDialogPane().setContent(g);
+        d.getDialogPane().getButtonTypes().addAll(ButtonType.CANCEL, ButtonType.OK);
+        if (d.showAndWait().orElse(ButtonType.CANCEL) == ButtonType.OK) {
+            organise(() -> Organising.moveToSquad(l.file(), p.id(), to.getValue(), from.getValue()));
+        }
     }
 
     private void addTemColumn(String name, java.util.function.Function<NoiseModel.TemRow, String> f, double w) {
@@ -376,6 +455,10 @@ public final class Workbench {
         if (l != null && temStale) {
             temStale = false;
             tem.getItems().setAll(l.builder().noise().temReport());
+            java.util.List<String> names = l.builder().academy().measurers().stream()
+                    .map(org.shapetrail.store.Measurer::name).toList();
+            measurerList.setText(names.isEmpty() ? "No measurers in this file yet: add one before the first visit."
+                    : "Measurers in this file: " + String.join(", ", names));
         }
     }
 

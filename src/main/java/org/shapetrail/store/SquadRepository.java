@@ -58,6 +58,18 @@ public final class SquadRepository {
         }
     }
 
+    /** Sets the last day of a membership (the one that started on {@code m.joinedOn()}); true when it existed. */
+    public boolean endMembership(Membership m, LocalDate lastDay) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("UPDATE membership SET left_on = ? WHERE person_id = ?"
+                + " AND squad_id = ? AND joined_on = ?")) {
+            ps.setString(1, lastDay.toString());
+            ps.setLong(2, m.personId());
+            ps.setLong(3, m.squadId());
+            ps.setString(4, m.joinedOn().toString());
+            return ps.executeUpdate() == 1;
+        }
+    }
+
     /** Every membership, by squad then person. */
     public List<Membership> memberships() throws SQLException {
         List<Membership> out = new ArrayList<>();

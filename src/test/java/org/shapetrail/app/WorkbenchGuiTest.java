@@ -132,6 +132,54 @@ class WorkbenchGuiTest {
     }
 
     @Test
+    void aMeasurerAndASquadAreAddedAndAJuniorMovesSquadInTheApp(FxRobot robot) throws Exception {
+        robot.interact(() -> workbench.pages().getSelectionModel().select(2));
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn("#add-measurer");
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn(robot.lookup(".dialog-pane .text-field").queryAs(TextField.class)).write("Nell Sandpiper")
+                .type(KeyCode.ENTER);
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.interact(() -> workbench.pages().getSelectionModel().select(1));
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn("#new-squad");
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn(robot.lookup(".dialog-pane .text-field").queryAs(TextField.class)).write("Under-16 development")
+                .type(KeyCode.ENTER);
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.interact(() -> workbench.pages().getSelectionModel().select(2));
+        WaitForAsyncUtils.waitForFxEvents();
+        String listed = robot.lookup("#measurer-list").queryAs(Label.class).getText();
+        assertTrue(listed.contains("Nell Sandpiper"), listed);
+        robot.interact(() -> workbench.pages().getSelectionModel().select(0));
+        select(robot, "Freya Breakwater");
+        robot.clickOn("#move-squad");
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.interact(() -> {
+            @SuppressWarnings("unchecked")
+            javafx.scene.control.ComboBox<org.shapetrail.store.Squad> to = robot.lookup("#move-to-squad")
+                    .queryAs(javafx.scene.control.ComboBox.class);
+            to.getItems().stream().filter(q -> q.name().equals("Under-16 development")).findFirst()
+                    .ifPresent(to::setValue);
+            robot.lookup("#move-from").queryAs(javafx.scene.control.DatePicker.class)
+                    .setValue(java.time.LocalDate.of(2026, 10, 1));
+        });
+        robot.clickOn("OK");
+        WaitForAsyncUtils.waitForFxEvents();
+        try (Database db = Database.open(file)) {
+            assertTrue(db.inTransaction(tx -> tx.measurers().all()).stream().anyMatch(m -> m.name().equals("Nell Sandpiper")));
+            var squads = db.inTransaction(tx -> tx.squads().all());
+            long u16 = squads.stream().filter(q -> q.name().equals("Under-16 development")).findFirst().orElseThrow().id();
+            long freya = db.inTransaction(tx -> tx.people().all()).stream()
+                    .filter(p -> p.displayName().equals("Freya Breakwater")).findFirst().orElseThrow().id();
+            var ms = db.inTransaction(tx -> tx.squads().membershipsOf(freya));
+            assertTrue(ms.stream().anyMatch(m -> m.squadId() == u16 && m.joinedOn().equals(java.time.LocalDate.of(2026, 10, 1))
+                    && m.leftOn() == null), ms.toString());
+            assertTrue(ms.stream().filter(m -> m.squadId() != u16).allMatch(m -> m.leftOn() != null), ms.toString());
+        }
+    }
+
+    @Test
     void aCompleteVisitEnteredByKeyboardAloneIsSavedShownAndStored(FxRobot robot) throws Exception {
         select(robot, "Freya Breakwater");
         int before = robot.lookup("#visits").queryAs(TableView.class).getItems().size();

@@ -1,0 +1,89 @@
+package org.shapetrail.app;
+
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.Locale;
+import java.util.Optional;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.Membership;
+import org.shapetrail.store.Squad;
+
+/**
+ * The small organising changes of a file: a new measurer, a new squad, a person moving to another squad
+ * from a date. Each is checked first and written in one transaction; a refusal is a sentence naming the
+ * value and what to do, and nothing is written.
+ */
+final class Organising {
+    private Organising() {
+    }
+
+    /** The outcome: empty when done, else why nothing was written. */
+    static Optional<String> addMeasurer(Path file, String name, String accreditation) {
+        String n = name == null ? "" : name.strip();
+        if (n.isEmpty()) {
+            return Optional.of("The measurer needs a name.");
+        }
+        try (Database db = Database.open(file)) {
+            return db.inTransaction(tx -> {
+                if (tx.measurers().all().stream().anyMatch(m -> same(m.name(), n))) {
+                    return Optional.of("There is already a measurer called " + n + " in this file.");
+                }
+                tx.measurers().insert(n, accreditation == null ? "" : accreditation.strip());
+                return Optional.<String>empty();
+            });
+        }
+    }
+
+    static Optional<String> addSquad(Path file, String name) {
+        String n = name == null ? "" : name.strip();
+        if (n.isEmpty()) {
+            return Optional.of("The squad needs a name.");
+        }
+        try (Database db = Database.open(file)) {
+            return db.inTransaction(tx -> {
+                if (tx.squads().all().stream().anyMatch(s -> same(s.name(), n))) {
+                    return Optional.of("There is already a squad called " + n + " in this file.");
+                }
+                tx.squads().insert(n);
+                return Optional.<String>empty();
+            });
+        }
+    }
+
+    /**
+     * Moves a person to {@code squad} from {@code from}: every membership still open on that day ends the
+     * day before (a membership that would only start on or after it is refused, as it would overlap).
+     */
+    static Optional<String> moveToSquad(Path file, long personId, Squad squad, LocalDate from) {
+        if (squad == null) {
+            return Optional.of("Choose the squad the person moves to.");
+        }
+        if (from == null) {
+            return Optional.of("Choose the day the person joins " + squad.name() + ".");
+        }
+        try (Database db = Database.open(file)) {
+            return db.inTransaction(tx -> {
+                java.util.List<Membership> open = tx.squads().membershipsOf(personId).stream()
+                        .filter(m -> m.leftOn() == null || !m.leftOn().isBefore(from)).toList();
+                for (Membership m : open) { // every refusal before anything is written
+                    if (!m.joinedOn().isBefore(from)) {
+                        return Optional.of("A membership starting on " + m.joinedOn() + " is already recorded; choose"
+                                + " a day after it.");
+                    }
+                    if (m.squadId() == squad.id() && m.leftOn() == null) {
+                        return Optional.of("The person is already in " + squad.name() + ".");
+                    }
+                }
+                for (Membership m : open) {
+                    tx.squads().endMembership(m, from.minusDays(1));
+                }
+                tx.squads().addMember(new Membership(personId, squad.id(), from, null));
+                return Optional.<String>empty();
+            });
+        }
+    }
+
+    private static boolean same(String a, String b) {
+        return a.strip().toLowerCase(Locale.ROOT).equals(b.strip().toLowerCase(Locale.ROOT));
+    }
+}
