@@ -10,7 +10,6 @@ work=$(mktemp -d)
 mvn -q -DskipTests package
 mvn -q test-compile
 cp=$(mvn -q dependency:build-classpath -Dmdep.outputFile=/dev/stdout):target/classes:target/test-classes
-mapfile -t options < bin/jvm-options
 java -cp "$cp" org.shapetrail.bench.ImportBenchmark --write "$work/trials.csv"
 echo "CSV: $(wc -l < "$work/trials.csv") lines, $(du -h "$work/trials.csv" | cut -f1)"
 # a first dry run records the commands' class-data archive (bin/shapetrail)
@@ -22,7 +21,7 @@ for run in 1 2 3 4 5; do
   s0=$(now)
   sqlite3 "$work/plain.db" ".mode csv" ".import $work/trials.csv trials"
   s1=$(now)
-  inside=$(java "${options[@]}" -cp "$cp" org.shapetrail.bench.ImportBenchmark "$work/trials.csv" | awk '{print $(NF-1)}')
+  inside=$(java @bin/jvm-options -cp "$cp" org.shapetrail.bench.ImportBenchmark "$work/trials.csv" | awk '{print $(NF-1)}')
   c0=$(now)
   bin/shapetrail import --db "$work/cli.sqlite" --commit --create-missing --show none "$work/trials.csv" > /dev/null
   c1=$(now)
@@ -34,5 +33,5 @@ for run in 1 2 3 4 5; do
     "$run" "$sq" "$inside" "$ratio" "$cli" "$(echo "scale=2; $cli / $sq" | bc)"
 done
 printf 'median ratio of the import: %s\n' "$(printf '%s\n' "${ratios[@]}" | sort -n | sed -n 3p)"
-java "${options[@]}" -cp "$cp" org.shapetrail.bench.ImportBenchmark "$work/trials.csv" --two-steps | tail -1
+java @bin/jvm-options -cp "$cp" org.shapetrail.bench.ImportBenchmark "$work/trials.csv" --two-steps | tail -1
 rm -rf "$work"

@@ -156,7 +156,7 @@ public final class HistoryBuilder {
         for (VisitResult r : withStature) {
             points.add(new ObservedPhv.Point(r.ageYears(), r.finalValues().get(Site.STATURE)));
         }
-        ObservedPhv.Result phv = ObservedPhv.fit(points);
+        GrowthSummary.PhvFit phv = new GrowthSummary.PhvFit(points);
         boolean rapid = velocity != null && last(results).ageYears() < MAX_MATURITY_AGE
                 && settings.alert().raisedBy(velocity);
         return new GrowthSummary(velocity, maturity, phv, target, percent, rapid, p.predictedAdultStatureCm(),
