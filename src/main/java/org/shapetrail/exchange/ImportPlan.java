@@ -52,7 +52,8 @@ public final class ImportPlan {
         this.columns = List.copyOf(columns);
         this.longLayout = longLayout;
         this.rows = rows;
-        this.visits = List.copyOf(visits);
+        // not copied: the importer's list makes each visit on demand, and nothing changes it
+        this.visits = java.util.Collections.unmodifiableList(visits);
         this.newPeople = List.copyOf(newPeople);
         this.newMeasurers = List.copyOf(newMeasurers);
         this.fileProblems = List.copyOf(fileProblems);

@@ -8,7 +8,9 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ArrayBlockingQueue;
 import java.util.concurrent.BlockingQueue;
+import org.shapetrail.measure.Problem;
 import org.shapetrail.measure.Site;
+import org.shapetrail.measure.SiteTrials;
 import org.shapetrail.store.Person;
 import org.shapetrail.store.VisitRepository;
 
@@ -109,6 +111,14 @@ final class ImportStream implements AutoCloseable {
             put(current);
             current = new Chunk();
         }
+    }
+
+    /**
+     * Checks a visit's trials with the core through the store's writer (reader thread), which then does not
+     * check them again before the commit.
+     */
+    List<Problem> check(int visitIndex, List<SiteTrials> trials) {
+        return writer.check(visitIndex, trials);
     }
 
     /** Nothing more will be written: the import is going to be rolled back. */

@@ -83,10 +83,18 @@ public final class Importer {
                 try (bulk; ImportStream stream = new ImportStream(bulk)) {
                     ImportPlan plan = read(file, existing, options, columns, stream);
                     boolean write = plan.canCommit() && !plan.visits().isEmpty();
-                    List<Visit> visits = plan.visits().stream().map(ImportPlan.PlannedVisit::visit).toList();
-                    if (write) {
-                        bulk.check(visits); // while the writer catches up
-                    }
+                    // a view: each visit is made when the writer looks at it, and dropped after
+                    List<Visit> visits = new java.util.AbstractList<>() {
+                        @Override
+                        public Visit get(int i) {
+                            return plan.visits().get(i).visit();
+                        }
+
+                        @Override
+                        public int size() {
+                            return plan.visits().size();
+                        }
+                    };
                     stream.drain();
                     if (!write) {
                         throw new NothingWritten(plan);
@@ -250,6 +258,33 @@ public final class Importer {
                 p.reopened = true;
             }
             current = p;
+        }
+
+        /**
+         * The visits to be written, made on demand from the compact ones read: a million trials kept as
+         * boxed numbers would keep the collector busy for the whole import.
+         */
+        private final class PlannedVisits extends java.util.AbstractList<ImportPlan.PlannedVisit>
+                implements java.util.RandomAccess {
+            private final List<Pending> ok;
+
+            PlannedVisits(List<Pending> ok) {
+                this.ok = ok;
+            }
+
+            @Override
+            public ImportPlan.PlannedVisit get(int i) {
+                Pending p = ok.get(i);
+                long measurerId = p.measurer == null ? 0 : p.measurer.id();
+                return new ImportPlan.PlannedVisit(p.personId, p.newIndex, measurerId, p.newMeasurer,
+                        new Visit(0, Math.max(0, p.personId), p.when, measurerId, p.context, "",
+                                trialsOf(p, new ArrayList<>(0))));
+            }
+
+            @Override
+            public int size() {
+                return ok.size();
+            }
         }
 
         /** The sites in the order of their codes, which is the order of the trial table's key. */
@@ -438,7 +473,6 @@ public final class Importer {
                 return ImportPlan.failed(cols, longLayout, fileProblems);
             }
             Map<String, Pending> pending = new HashMap<>();
-            Map<String, Pending> byRawKey = new HashMap<>();
             Map<String, Long> wideKeys = new HashMap<>();
             // the previous row's key cells and where that row went: rows of one visit usually follow each other
             Pending previous = null;
@@ -465,15 +499,6 @@ public final class Importer {
                 rec.remember(keyColumns);
                 havePrevious = true;
                 previous = null;
-                String rawKey = rawKey(rec);
-                Pending same = longLayout ? byRawKey.get(rawKey) : null;
-                if (same != null) {
-                    previous = same;
-                    log.visitRow(line, same.index);
-                    enter(same);
-                    values(rec, line, same);
-                    continue;
-                }
                 List<String> why = new ArrayList<>(2);
                 Head head = head(rec, why);
                 if (head == null) {
@@ -505,7 +530,6 @@ public final class Importer {
                     pending.put(key, p);
                     visits.add(p);
                 }
-                byRawKey.put(rawKey, p);
                 previous = p;
                 log.visitRow(line, p.index);
                 enter(p);
@@ -521,18 +545,15 @@ public final class Importer {
 
         /** Checks each gathered visit with the core and gives every row its outcome. */
         private ImportPlan finish(List<String> fileProblems) {
-            List<ImportPlan.PlannedVisit> planned = new ArrayList<>(visits.size());
+            List<Pending> planned = new ArrayList<>(visits.size());
             String[] reasons = new String[visits.size()];
             for (Pending p : visits) {
                 if (p.problems == null) {
-                    Checked c = p.checked != null && p.checked.isEmpty() ? new Checked(trialsOf(p), NO_PROBLEMS)
-                            : p.checked != null ? new Checked(List.of(), p.checked) : check(p);
-                    if (!c.problems().isEmpty()) {
-                        c.problems().forEach(p::problem);
+                    List<String> found = p.checked != null ? p.checked : check(p).problems();
+                    if (!found.isEmpty()) {
+                        found.forEach(p::problem);
                     } else {
-                        long measurerId = p.measurer == null ? 0 : p.measurer.id();
-                        planned.add(new ImportPlan.PlannedVisit(p.personId, p.newIndex, measurerId, p.newMeasurer,
-                                new Visit(0, Math.max(0, p.personId), p.when, measurerId, p.context, "", c.trials())));
+                        planned.add(p);
                     }
                 }
                 if (p.problems != null) {
@@ -542,16 +563,21 @@ public final class Importer {
             if (log.size() == 0) {
                 fileProblems.add("It has a header but no rows.");
             }
-            return new ImportPlan(cols, longLayout, log.resolve(reasons), planned, newPeople, newMeasurers,
+            return new ImportPlan(cols, longLayout, log.resolve(reasons), new PlannedVisits(planned), newPeople, newMeasurers,
                     fileProblems, 0);
         }
 
-        /** The visit's trials, checked by the core. */
+        /**
+         * The visit's trials, checked by the core: when writing, by the store's bulk writer itself, so that
+         * the writer need not check them again before the commit.
+         */
         private Checked check(Pending p) {
             List<String> problems = new ArrayList<>(0);
             List<SiteTrials> trials = trialsOf(p, problems);
             if (problems.isEmpty()) {
-                for (Problem pr : VisitCheck.evaluate(trials).problems()) {
+                List<Problem> found = stream != null ? stream.check(p.index, trials)
+                        : VisitCheck.evaluate(trials).problems();
+                for (Problem pr : found) {
                     problems.add(pr.message());
                 }
                 if (trials.isEmpty()) {
@@ -559,11 +585,6 @@ public final class Importer {
                 }
             }
             return new Checked(trials, problems);
-        }
-
-        /** For a visit already checked without problems. */
-        private List<SiteTrials> trialsOf(Pending p) {
-            return trialsOf(p, new ArrayList<>(0));
         }
 
         /** The visit's trials by site, in the order of the sites; a gap in a site's trial numbers goes to {@code problems}. */
@@ -597,16 +618,6 @@ public final class Importer {
                 }
             }
             return trials;
-        }
-
-        /** The cells that say who, when and by whom, joined: equal keys mean the same visit. */
-        private String rawKey(CsvRows rec) {
-            StringBuilder sb = new StringBuilder(64);
-            for (Column.Role r : KEY_ROLES) {
-                String c = cell(rec, r);
-                sb.append(c.length()).append(':').append(c); // length first: no two keys run together alike
-            }
-            return sb.toString();
         }
 
         /** Who, when and by whom; null (with the reasons) when the row cannot be placed. */

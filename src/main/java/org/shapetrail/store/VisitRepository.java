@@ -73,6 +73,25 @@ public final class VisitRepository {
         }
     }
 
+    /** A 64-bit fingerprint of a visit's sites and values, in order (a splitmix-style mix of each). */
+    static long fingerprint(List<SiteTrials> trials) {
+        long h = 0x9E3779B97F4A7C15L;
+        for (SiteTrials t : trials) {
+            h = mix(h + t.site().ordinal());
+            h = mix(h + t.values().size());
+            for (double v : t.values()) {
+                h = mix(h + Double.doubleToLongBits(v));
+            }
+        }
+        return h;
+    }
+
+    private static long mix(long z) {
+        z = (z ^ (z >>> 30)) * 0xBF58476D1CE4E5B9L;
+        z = (z ^ (z >>> 27)) * 0x94D049BB133111EBL;
+        return z ^ (z >>> 31);
+    }
+
     private static final int VISIT_ROWS = 50;
 
     /** Writes visit rows ({@value #VISIT_ROWS} per statement, the rest one by one). */
@@ -135,7 +154,8 @@ public final class VisitRepository {
         private int[] trialsOf = new int[1024];
         private int[] countWritten = new int[1024];
         private int visits;
-        private List<List<SiteTrials>> checked;
+        private long[] checked = new long[1024];
+        private boolean[] isChecked = new boolean[1024];
 
         private BulkWriter(long firstId) throws SQLException {
             this.firstId = firstId;
@@ -210,30 +230,36 @@ public final class VisitRepository {
         }
 
         /**
-         * Checks every visit's trials with the core, without writing; may run while the writing goes on.
-         * {@link #finish} then checks again only visits whose trials are not the very lists checked here.
+         * Checks the trials of the visit numbered {@code index} with the core, without writing; may run on
+         * another thread than the writing calls, while they go on. {@link #finish} then checks again only the
+         * visits whose trials differ from those checked here without problems (compared by a 64-bit
+         * fingerprint of every site and value, so nothing needs to be kept).
          *
-         * @throws InvalidVisitException when a visit is refused
+         * @return every problem; none when the visit can be written
          */
-        public void check(List<Visit> all) {
-            List<List<SiteTrials>> done = new ArrayList<>(all.size());
-            for (Visit v : all) {
-                VisitRepository.check(v);
-                done.add(v.trials());
+        public List<org.shapetrail.measure.Problem> check(int index, List<SiteTrials> visitTrials) {
+            VisitEvaluation ev = VisitCheck.evaluate(visitTrials);
+            if (ev.isValid()) {
+                if (index >= checked.length) {
+                    checked = java.util.Arrays.copyOf(checked, Math.max(index + 1, checked.length * 2));
+                    isChecked = java.util.Arrays.copyOf(isChecked, checked.length);
+                }
+                checked[index] = fingerprint(visitTrials);
+                isChecked[index] = true;
             }
-            checked = done;
+            return ev.problems();
         }
 
         /**
          * Ends the write of {@code all}, the visits in the order of their ids: each checked with the core
-         * (unless {@link #check} was given its very trials), and exactly its trials written.
+         * (unless {@link #check} passed its very trials), and exactly its trials written.
          *
          * @throws InvalidVisitException when a visit is refused; StoreException when what was written differs
          */
         public void finish(List<Visit> all) throws SQLException {
             for (int i = 0; i < all.size(); i++) {
                 Visit v = all.get(i);
-                if (checked == null || i >= checked.size() || checked.get(i) != v.trials()) {
+                if (i >= checked.length || !isChecked[i] || checked[i] != fingerprint(v.trials())) {
                     VisitRepository.check(v);
                 }
             }

@@ -189,6 +189,18 @@ class OnePassImportTest {
                 return null;
             }));
             assertEquals(Integer.valueOf(0), d.inTransaction(tx -> tx.visits().count()));
+            // a visit the core refuses is refused at the end too, unless the same trials passed the check before
+            Visit metres = new Visit(0, person, when, measurer, "", "", List.of(SiteTrials.of(Site.STATURE, 1.50)));
+            assertThrows(org.shapetrail.store.InvalidVisitException.class, () -> d.inTransaction(tx -> {
+                try (var bulk = tx.visits().bulkWriter()) {
+                    assertFalse(bulk.check(0, metres.trials()).isEmpty(), "stature in metres");
+                    bulk.visit(bulk.firstId(), person, when, measurer, "", 1);
+                    bulk.trial(bulk.firstId(), Site.STATURE, 1, 1.50);
+                    bulk.finish(List.of(metres));
+                }
+                return null;
+            }));
+            assertEquals(Integer.valueOf(0), d.inTransaction(tx -> tx.visits().count()));
             d.inTransaction(tx -> {
                 try (var bulk = tx.visits().bulkWriter()) {
                     bulk.visit(bulk.firstId(), person, when, measurer, "", 1);
