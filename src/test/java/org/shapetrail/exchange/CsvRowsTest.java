@@ -86,6 +86,41 @@ class CsvRowsTest {
     }
 
     @Test
+    void plainDecimalsAreReadExactlyAsDoubleParseDoubleReadsThem() throws Exception {
+        // property over 20,000 random decimals (fixed seed) against the JDK's correctly rounded parser
+        Random rnd = new Random(42);
+        StringBuilder csv = new StringBuilder("v\n");
+        List<String> texts = new ArrayList<>();
+        for (int i = 0; i < 20_000; i++) {
+            String digits = Long.toString(Math.abs(rnd.nextLong()) % 1_000_000_000_000_000L);
+            int cut = rnd.nextInt(digits.length() + 1);
+            String t = (rnd.nextInt(5) == 0 ? "-" : "") + digits.substring(0, cut)
+                    + (rnd.nextBoolean() ? "." + digits.substring(cut) : digits.substring(cut));
+            if (t.equals("-") || t.isEmpty() || t.equals(".") || t.equals("-.")) {
+                t = "0.5";
+            }
+            texts.add(t);
+            csv.append(t).append('\n');
+        }
+        Path f = dir.resolve("numbers.csv");
+        Files.writeString(f, csv.toString(), StandardCharsets.UTF_8);
+        int fast = 0;
+        try (CsvRows rows = new CsvRows(f, ',')) {
+            for (String t : texts) {
+                assertTrue(rows.next());
+                double v = rows.plainDecimal(0, '.');
+                if (!Double.isNaN(v)) {
+                    fast++;
+                    assertEquals(Double.doubleToLongBits(Double.parseDouble(t)), Double.doubleToLongBits(v), t);
+                } else {
+                    assertTrue(t.replace("-", "").replace(".", "").length() > 15, "only long numbers leave the fast path: " + t);
+                }
+            }
+        }
+        assertTrue(fast > 10_000, "most random decimals are plain: " + fast);
+    }
+
+    @Test
     void aRecordsLineIsTheLineItStartsOn() throws Exception {
         Path f = dir.resolve("lines.csv");
         Files.writeString(f, "name,note\r\nA,x\n\nB,\"two\nlines\"\rC,last", StandardCharsets.UTF_8);
