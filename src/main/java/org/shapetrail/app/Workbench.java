@@ -101,6 +101,9 @@ public final class Workbench {
         Button open = new Button("Open file…");
         open.setId("open-file");
         open.setOnAction(e -> chooseFile());
+        Button create = new Button("New file…");
+        create.setId("new-file");
+        create.setOnAction(e -> chooseNewFile());
         Button bring = new Button("Bring in a spreadsheet…");
         bring.setId("import-file");
         bring.setOnAction(e -> importFile());
@@ -114,7 +117,7 @@ public final class Workbench {
                 root.getStyleClass().remove("dark");
             }
         });
-        HBox bar = new HBox(12, title, file, gap, bring, open, dark);
+        HBox bar = new HBox(12, title, file, gap, bring, create, open, dark);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.getStyleClass().add("app-header");
         bar.setPadding(new Insets(10, 14, 10, 14));
@@ -609,6 +612,17 @@ public final class Workbench {
                     root.getScene().getWindow(), vm::reload).show();
         } catch (java.io.IOException | RuntimeException e) {
             vm.errorProperty().set("The file " + f.getName() + " cannot be read: " + Errors.describe(e));
+        }
+    }
+
+    private void chooseNewFile() {
+        FileChooser fc = new FileChooser();
+        fc.setTitle("A new, empty Shapetrail file");
+        fc.setInitialFileName("academy.sqlite");
+        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Shapetrail files", "*.sqlite"));
+        var f = fc.showSaveDialog(root.getScene().getWindow());
+        if (f != null) {
+            vm.createAndOpen(f.toPath());
         }
     }
 

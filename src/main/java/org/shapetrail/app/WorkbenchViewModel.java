@@ -70,6 +70,26 @@ public final class WorkbenchViewModel {
         });
     }
 
+    /**
+     * Starts a new, empty file (for an academy's own record, apart from the demo) and opens it; an
+     * existing file is never overwritten.
+     */
+    public void createAndOpen(Path file) {
+        error.set("");
+        if (java.nio.file.Files.exists(file)) {
+            error.set("The file " + file.getFileName() + " already exists; choose a new name, or open it with"
+                    + " Open file….");
+            return;
+        }
+        AnalysisSettings s = settings;
+        runner.run("Creating " + file.getFileName(), progress -> {
+            try (Database db = Database.open(file)) {
+                db.schemaVersion(); // created and brought to the current schema
+            }
+            return load(file, s, progress);
+        }, this::show, t -> error.set(Errors.describe(t)));
+    }
+
     /** Reads and computes a whole file (runs off the FX thread). */
     static Loaded load(Path file, AnalysisSettings s, TaskRunner.Progress progress) throws InterruptedException {
         Academy academy;

@@ -25,6 +25,22 @@ class WorkbenchViewModelTest {
     }
 
     @Test
+    void aNewFileStartsEmptyAndAnExistingOneIsNeverOverwritten() throws Exception {
+        Path fresh = dir.resolve("our-academy.sqlite");
+        vm.createAndOpen(fresh);
+        assertEquals("", vm.errorProperty().get());
+        assertEquals(0, vm.rows().size());
+        assertEquals(fresh, vm.loadedProperty().get().file());
+        Path demo = dir.resolve("demo.sqlite");
+        long size = java.nio.file.Files.size(demo);
+        vm.createAndOpen(demo);
+        assertEquals("The file demo.sqlite already exists; choose a new name, or open it with Open file….",
+                vm.errorProperty().get());
+        assertEquals(fresh, vm.loadedProperty().get().file(), "the open file stays open");
+        assertEquals(size, java.nio.file.Files.size(demo));
+    }
+
+    @Test
     void listsEveryoneAndFiltersAsYouType() {
         assertEquals(60, /* the demo academy: 40 juniors + 20 seniors */ vm.rows().size());
         vm.searchProperty().set("zoe");
