@@ -40,9 +40,7 @@ final class ImportReading {
             Column.Role.BIRTH_DATE, Column.Role.SEX, Column.Role.DATE, Column.Role.TIME, Column.Role.MEASURER,
             Column.Role.CONTEXT);
 
-
     private static final Site[] SITES = Site.values();
-    private final Academy existing;
     private final ImportOptions options;
     private final DecimalStyle decimals;
     private final List<Column> cols;
@@ -74,7 +72,7 @@ final class ImportReading {
     private record Checked(List<SiteTrials> trials, List<String> problems) {
     }
 
-    /** What an early check leaves: only its problems (usually none); the trials are made again at the end. */
+    /** What an early check leaves: only its problems (usually none); the trials are made again when needed. */
     private static final List<String> NO_PROBLEMS = List.of();
 
     /** Where each site's trials go in a visit's values: the sites of a file get slots as they appear. */
@@ -245,7 +243,6 @@ final class ImportReading {
     }
 
     ImportReading(Academy existing, ImportOptions options, DecimalStyle decimals, List<Column> cols, ImportStream stream) {
-        this.existing = existing;
         this.options = options;
         this.decimals = decimals;
         this.cols = cols;
