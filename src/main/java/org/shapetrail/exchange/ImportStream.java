@@ -197,7 +197,7 @@ final class ImportStream implements AutoCloseable {
         if (item instanceof VisitRow v) {
             long person = v.personId() > 0 ? v.personId() : newPeople.get(v.newPerson());
             long measurer = v.newMeasurer() != null ? newMeasurers.get(v.newMeasurer()) : v.measurerId();
-            writer.visit(v.id(), person, v.when(), measurer, v.context(), v.trialCount());
+            writer.visit(v.id(), person, v.when(), measurer, v.context(), "", v.trialCount());
         } else if (item instanceof NewPerson p) {
             newPeople.add(writer.person(p.draft()));
         } else if (item instanceof NewMeasurer m) {

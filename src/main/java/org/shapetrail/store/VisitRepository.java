@@ -44,21 +44,27 @@ public final class VisitRepository {
      * imports and the demo database. Nothing is written if any visit is refused.
      */
     public List<Visit> insertAll(List<Visit> visits) throws SQLException {
-        for (Visit v : visits) {
-            check(v);
-        }
-        long nextId = nextVisitId();
-        List<Visit> saved = new ArrayList<>(visits.size());
-        for (Visit v : visits) {
-            saved.add(v.withId(nextId++));
-        }
-        insertVisitRows(saved);
-        try (TrialWriter trials = new TrialWriter(c)) {
-            for (Visit v : saved) {
-                trials.addAll(v.id(), v.trials());
+        try (BulkWriter w = bulkWriter()) {
+            for (int i = 0; i < visits.size(); i++) {
+                List<org.shapetrail.measure.Problem> problems = w.check(i, visits.get(i).trials());
+                if (!problems.isEmpty()) {
+                    throw new InvalidVisitException(problems);
+                }
             }
+            List<Visit> saved = new ArrayList<>(visits.size());
+            for (Visit v : visits) {
+                Visit s = v.withId(w.firstId() + saved.size());
+                w.visit(s.id(), s.personId(), s.measuredAt(), s.measurerId(), s.context(), s.notes(), s.trialCount());
+                for (SiteTrials t : s.trials()) {
+                    for (int k = 0; k < t.values().size(); k++) {
+                        w.trial(s.id(), t.site(), k + 1, t.values().get(k));
+                    }
+                }
+                saved.add(s);
+            }
+            w.finish(saved);
+            return saved;
         }
-        return saved;
     }
 
     /**
@@ -90,35 +96,6 @@ public final class VisitRepository {
         z = (z ^ (z >>> 30)) * 0xBF58476D1CE4E5B9L;
         z = (z ^ (z >>> 27)) * 0x94D049BB133111EBL;
         return z ^ (z >>> 31);
-    }
-
-    private static final int VISIT_ROWS = 50;
-
-    /** Writes visit rows ({@value #VISIT_ROWS} per statement, the rest one by one). */
-    private void insertVisitRows(List<Visit> withIds) throws SQLException {
-        String insert = "INSERT INTO visit (id, person_id, measured_at, measurer_id, context, notes, trial_count) VALUES";
-        String row = " (?, ?, ?, ?, ?, ?, ?)";
-        try (PreparedStatement many = c.prepareStatement(insert + row + (", " + row).repeat(VISIT_ROWS - 1));
-             PreparedStatement one = c.prepareStatement(insert + row)) {
-            int whole = withIds.size() / VISIT_ROWS * VISIT_ROWS;
-            for (int i = 0; i < whole; i += VISIT_ROWS) {
-                for (int k = 0; k < VISIT_ROWS; k++) {
-                    bindVisit(many, k * 7, withIds.get(i + k));
-                }
-                many.executeUpdate();
-            }
-            for (int i = whole; i < withIds.size(); i++) {
-                bindVisit(one, 0, withIds.get(i));
-                one.addBatch();
-            }
-            if (whole < withIds.size()) {
-                one.executeBatch();
-            }
-        }
-    }
-
-    private static void bindVisit(PreparedStatement ps, int offset, Visit v) throws SQLException {
-        bindVisit(ps, offset, v, v.trialCount());
     }
 
     private static void bindVisit(PreparedStatement ps, int offset, Visit v, int trialCount) throws SQLException {
@@ -183,7 +160,7 @@ public final class VisitRepository {
          * @param trialCount the trials it has now; {@link #finish} corrects it if more come later
          */
         public void visit(long id, long personId, LocalDateTime measuredAt, long measurerId, String context,
-                          int trialCount) throws SQLException {
+                          String notes, int trialCount) throws SQLException {
             if (id != firstId + visits) {
                 throw new StoreException("Visit " + id + " is out of order in the bulk write; nothing was written.");
             }
@@ -192,7 +169,7 @@ public final class VisitRepository {
                 trialsOf = java.util.Arrays.copyOf(trialsOf, visits * 2);
             }
             countWritten[visits++] = trialCount;
-            unwritten.add(new Visit(id, personId, measuredAt, measurerId, context, "", List.of()));
+            unwritten.add(new Visit(id, personId, measuredAt, measurerId, context, notes, List.of()));
             if (unwritten.size() == VISITS_PER_STATEMENT) {
                 writeVisitRows();
             }

@@ -182,7 +182,7 @@ class OnePassImportTest {
             Visit twoTrials = new Visit(0, person, when, measurer, "", "", List.of(SiteTrials.of(Site.STATURE, 150.0, 150.2)));
             assertThrows(StoreException.class, () -> d.inTransaction(tx -> {
                 try (var bulk = tx.visits().bulkWriter()) {
-                    bulk.visit(bulk.firstId(), person, when, measurer, "", 2);
+                    bulk.visit(bulk.firstId(), person, when, measurer, "", "", 2);
                     bulk.trial(bulk.firstId(), Site.STATURE, 1, 150.0); // the second trial never comes
                     bulk.finish(List.of(twoTrials));
                 }
@@ -194,7 +194,7 @@ class OnePassImportTest {
             assertThrows(org.shapetrail.store.InvalidVisitException.class, () -> d.inTransaction(tx -> {
                 try (var bulk = tx.visits().bulkWriter()) {
                     assertFalse(bulk.check(0, metres.trials()).isEmpty(), "stature in metres");
-                    bulk.visit(bulk.firstId(), person, when, measurer, "", 1);
+                    bulk.visit(bulk.firstId(), person, when, measurer, "", "", 1);
                     bulk.trial(bulk.firstId(), Site.STATURE, 1, 1.50);
                     bulk.finish(List.of(metres));
                 }
@@ -203,7 +203,7 @@ class OnePassImportTest {
             assertEquals(Integer.valueOf(0), d.inTransaction(tx -> tx.visits().count()));
             d.inTransaction(tx -> {
                 try (var bulk = tx.visits().bulkWriter()) {
-                    bulk.visit(bulk.firstId(), person, when, measurer, "", 1);
+                    bulk.visit(bulk.firstId(), person, when, measurer, "", "", 1);
                     bulk.trial(bulk.firstId(), Site.STATURE, 1, 150.0);
                     bulk.trial(bulk.firstId(), Site.STATURE, 2, 150.2); // came later: the count is corrected
                     bulk.finish(List.of(twoTrials));
