@@ -83,6 +83,35 @@ final class Organising {
         }
     }
 
+    /**
+     * Ends every membership of a person still open on {@code lastDay} with that day, when they leave the
+     * academy (or the squads it keeps); their visits stay.
+     */
+    static Optional<String> leave(Path file, long personId, LocalDate lastDay) {
+        if (lastDay == null) {
+            return Optional.of("Choose the last day in the squad.");
+        }
+        try (Database db = Database.open(file)) {
+            return db.inTransaction(tx -> {
+                java.util.List<Membership> open = tx.squads().membershipsOf(personId).stream()
+                        .filter(m -> m.leftOn() == null || m.leftOn().isAfter(lastDay)).toList();
+                if (open.isEmpty()) {
+                    return Optional.of("The person is in no squad on " + lastDay + ".");
+                }
+                for (Membership m : open) {
+                    if (lastDay.isBefore(m.joinedOn())) {
+                        return Optional.of("A membership starting on " + m.joinedOn() + " is recorded; the last day"
+                                + " cannot be before it.");
+                    }
+                }
+                for (Membership m : open) {
+                    tx.squads().endMembership(m, lastDay);
+                }
+                return Optional.<String>empty();
+            });
+        }
+    }
+
     private static boolean same(String a, String b) {
         return a.strip().toLowerCase(Locale.ROOT).equals(b.strip().toLowerCase(Locale.ROOT));
     }

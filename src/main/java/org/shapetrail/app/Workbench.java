@@ -326,6 +326,9 @@ public final class Workbench {
         }
     }
 
+    /** The choice in "Move to squad" for someone who leaves: their memberships end on the chosen day. */
+    private static final org.shapetrail.store.Squad LEAVES = new org.shapetrail.store.Squad(-1, "No squad (leaves)");
+
     private void moveToSquad(org.shapetrail.store.Person p) {
         Loaded l = vm.loadedProperty().get();
         if (l == null) {
@@ -333,10 +336,12 @@ public final class Workbench {
         }
         javafx.scene.control.Dialog<ButtonType> d = new javafx.scene.control.Dialog<>();
         d.setTitle("Move to squad");
-        d.setHeaderText(p.displayName() + " moves to another squad; the current membership ends the day before.");
+        d.setHeaderText(p.displayName() + " moves to another squad (the current membership ends the day before),"
+                + " or leaves: choose \"" + LEAVES.name() + "\" and the last day.");
         d.initOwner(root.getScene().getWindow());
         ComboBox<org.shapetrail.store.Squad> to = new ComboBox<>(javafx.collections.FXCollections.observableArrayList(
                 l.builder().academy().squads()));
+        to.getItems().add(LEAVES);
         to.setId("move-to-squad");
         to.setConverter(new javafx.util.StringConverter<>() {
             @Override
@@ -355,11 +360,15 @@ public final class Workbench {
         g.setHgap(8);
         g.setVgap(8);
         g.addRow(0, new Label("Squad"), to);
-        g.addRow(1, new Label("From"), from);
+        Label fromLabel = new Label("From");
+        fromLabel.textProperty().bind(javafx.beans.binding.Bindings.when(to.valueProperty().isEqualTo(LEAVES))
+                .then("Last day").otherwise("From"));
+        g.addRow(1, fromLabel, from);
         d.getDialogPane().setContent(g);
         d.getDialogPane().getButtonTypes().addAll(ButtonType.CANCEL, ButtonType.OK);
         if (d.showAndWait().orElse(ButtonType.CANCEL) == ButtonType.OK) {
-            organise(() -> Organising.moveToSquad(l.file(), p.id(), to.getValue(), from.getValue()));
+            organise(() -> to.getValue() == LEAVES ? Organising.leave(l.file(), p.id(), from.getValue())
+                    : Organising.moveToSquad(l.file(), p.id(), to.getValue(), from.getValue()));
         }
     }
 

@@ -72,5 +72,14 @@ class OrganisingTest {
         try (Database db = Database.open(file)) {
             assertEquals(before, ContentDigest.of(db), "a refused move writes nothing");
         }
+        assertTrue(Organising.leave(file, person, LocalDate.of(2025, 6, 30)).orElseThrow()
+                .startsWith("A membership starting on 2025-09-01 is recorded"));
+        assertEquals(Optional.empty(), Organising.leave(file, person, LocalDate.of(2026, 7, 31)));
+        try (Database db = Database.open(file)) {
+            assertEquals(new Membership(person, u15.id(), LocalDate.of(2025, 9, 1), LocalDate.of(2026, 7, 31)),
+                    db.inTransaction(tx -> tx.squads().membershipsOf(person)).get(1));
+        }
+        assertEquals(Optional.of("The person is in no squad on 2026-08-01."),
+                Organising.leave(file, person, LocalDate.of(2026, 8, 1)));
     }
 }

@@ -177,6 +177,26 @@ class WorkbenchGuiTest {
                     && m.leftOn() == null), ms.toString());
             assertTrue(ms.stream().filter(m -> m.squadId() != u16).allMatch(m -> m.leftOn() != null), ms.toString());
         }
+        // and she leaves at the end of the season
+        robot.clickOn("#move-squad");
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.interact(() -> {
+            @SuppressWarnings("unchecked")
+            javafx.scene.control.ComboBox<org.shapetrail.store.Squad> to = robot.lookup("#move-to-squad")
+                    .queryAs(javafx.scene.control.ComboBox.class);
+            to.setValue(to.getItems().get(to.getItems().size() - 1));
+            robot.lookup("#move-from").queryAs(javafx.scene.control.DatePicker.class)
+                    .setValue(java.time.LocalDate.of(2027, 6, 30));
+        });
+        assertTrue(robot.lookup("Last day").tryQuery().isPresent(), "the date is asked for as the last day");
+        robot.clickOn("OK");
+        WaitForAsyncUtils.waitForFxEvents();
+        try (Database db = Database.open(file)) {
+            long freya = db.inTransaction(tx -> tx.people().all()).stream()
+                    .filter(p -> p.displayName().equals("Freya Breakwater")).findFirst().orElseThrow().id();
+            assertTrue(db.inTransaction(tx -> tx.squads().membershipsOf(freya)).stream()
+                    .allMatch(m -> m.leftOn() != null && !m.leftOn().isAfter(java.time.LocalDate.of(2027, 6, 30))));
+        }
     }
 
     @Test
