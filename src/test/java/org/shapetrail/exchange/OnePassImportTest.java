@@ -92,7 +92,7 @@ class OnePassImportTest {
         Files.writeString(csv, "name,birth_date,sex,date,measurer,site,trial,value\n" + String.join("\n", rows) + "\n");
         try (Database d = Database.open(dir.resolve("s.sqlite"))) {
             ImportPlan plan = Importer.importFile(d, csv, CREATE, null);
-            assertEquals(30, plan.written(), plan.summary());
+            assertEquals(30, plan.written(), plan.summary()); // one visit per runner, 30 runners in the file
             Academy a = Academy.load(d);
             assertEquals(30, a.visits().size());
             for (Visit v : a.visits()) {

@@ -38,6 +38,7 @@ class NativeLibraryCacheTest {
     void theFolderForThisMachineIsSqliteJdbcsOwn() {
         assertEquals(org.sqlite.util.OSInfo.getNativeLibFolderPathForCurrentOS(), NativeLibraryCache.nativeFolder(
                 System.getProperty("os.name"), System.getProperty("os.arch")).orElseThrow());
+        // folder names as sqlite-jdbc's jar lays them out (org/sqlite/native/<OS>/<arch>/)
         assertEquals("Windows/x86_64", NativeLibraryCache.nativeFolder("Windows 11", "amd64").orElseThrow());
         assertEquals("Mac/aarch64", NativeLibraryCache.nativeFolder("Mac OS X", "aarch64").orElseThrow());
         assertTrue(NativeLibraryCache.nativeFolder("FreeBSD", "amd64").isEmpty());
