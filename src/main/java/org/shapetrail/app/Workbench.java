@@ -668,7 +668,13 @@ public final class Workbench {
     private void editVisit(VisitLine line) {
         stored(line).ifPresent(shown -> {
             Path file = vm.loadedProperty().get().file();
-            Optional<VisitSnapshot> before = VisitSnapshot.read(file, shown.id());
+            Optional<VisitSnapshot> before;
+            try {
+                before = OffFxThread.call(storing, () -> VisitSnapshot.read(file, shown.id()));
+            } catch (RuntimeException e) {
+                vm.errorProperty().set("The visit cannot be edited now: " + Errors.describe(e));
+                return;
+            }
             Optional<Visit> after = entryFor(shown).showAndWait();
             if (after.isPresent() && before.isPresent()) {
                 pushUndo("the edit of the visit of " + line.date(), () -> before.get().restoreEdited(file));

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.TimeUnit;
 import javafx.embed.swing.SwingFXUtils;
@@ -131,72 +132,73 @@ class WorkbenchGuiTest {
         }
     }
 
+    void page(FxRobot robot, int index) {
+        robot.interact(() -> workbench.pages().getSelectionModel().select(index));
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
+    /** Clicks {@code button}, types {@code name} into the dialog that asks for it and confirms. */
+    static void answer(FxRobot robot, String button, String name) {
+        robot.clickOn(button);
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn(robot.lookup(".dialog-pane .text-field").queryAs(TextField.class)).write(name).type(KeyCode.ENTER);
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
+    /** Opens "Move to squad" and fills it in: the squad {@code pick} chooses from the list, and the day. */
+    static void fillMove(FxRobot robot, java.util.function.Function<List<org.shapetrail.store.Squad>,
+            org.shapetrail.store.Squad> pick, java.time.LocalDate day) {
+        robot.clickOn("#move-squad");
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.interact(() -> {
+            @SuppressWarnings("unchecked")
+            javafx.scene.control.ComboBox<org.shapetrail.store.Squad> to = robot.lookup("#move-to-squad")
+                    .queryAs(javafx.scene.control.ComboBox.class);
+            to.setValue(pick.apply(to.getItems()));
+            robot.lookup("#move-from").queryAs(javafx.scene.control.DatePicker.class).setValue(day);
+        });
+    }
+
+    List<org.shapetrail.store.Membership> membershipsOf(String name) {
+        try (Database db = Database.open(file)) {
+            long id = db.inTransaction(tx -> tx.people().all()).stream()
+                    .filter(p -> p.displayName().equals(name)).findFirst().orElseThrow().id();
+            return db.inTransaction(tx -> tx.squads().membershipsOf(id));
+        }
+    }
+
     @Test
     void aMeasurerAndASquadAreAddedAndAJuniorMovesSquadInTheApp(FxRobot robot) throws Exception {
-        robot.interact(() -> workbench.pages().getSelectionModel().select(2));
-        WaitForAsyncUtils.waitForFxEvents();
-        robot.clickOn("#add-measurer");
-        WaitForAsyncUtils.waitForFxEvents();
-        robot.clickOn(robot.lookup(".dialog-pane .text-field").queryAs(TextField.class)).write("Nell Sandpiper")
-                .type(KeyCode.ENTER);
-        WaitForAsyncUtils.waitForFxEvents();
-        robot.interact(() -> workbench.pages().getSelectionModel().select(1));
-        WaitForAsyncUtils.waitForFxEvents();
-        robot.clickOn("#new-squad");
-        WaitForAsyncUtils.waitForFxEvents();
-        robot.clickOn(robot.lookup(".dialog-pane .text-field").queryAs(TextField.class)).write("Under-16 development")
-                .type(KeyCode.ENTER);
-        WaitForAsyncUtils.waitForFxEvents();
-        robot.interact(() -> workbench.pages().getSelectionModel().select(2));
-        WaitForAsyncUtils.waitForFxEvents();
+        page(robot, 2);
+        answer(robot, "#add-measurer", "Nell Sandpiper");
+        page(robot, 1);
+        answer(robot, "#new-squad", "Under-16 development");
+        page(robot, 2);
         String listed = robot.lookup("#measurer-list").queryAs(Label.class).getText();
         assertTrue(listed.contains("Nell Sandpiper"), listed);
-        robot.interact(() -> workbench.pages().getSelectionModel().select(0));
+        page(robot, 0);
         select(robot, "Freya Breakwater");
-        robot.clickOn("#move-squad");
-        WaitForAsyncUtils.waitForFxEvents();
-        robot.interact(() -> {
-            @SuppressWarnings("unchecked")
-            javafx.scene.control.ComboBox<org.shapetrail.store.Squad> to = robot.lookup("#move-to-squad")
-                    .queryAs(javafx.scene.control.ComboBox.class);
-            to.getItems().stream().filter(q -> q.name().equals("Under-16 development")).findFirst()
-                    .ifPresent(to::setValue);
-            robot.lookup("#move-from").queryAs(javafx.scene.control.DatePicker.class)
-                    .setValue(java.time.LocalDate.of(2026, 10, 1));
-        });
+        fillMove(robot, squads -> squads.stream().filter(q -> q.name().equals("Under-16 development")).findFirst()
+                .orElseThrow(), java.time.LocalDate.of(2026, 10, 1));
         robot.clickOn("OK");
         WaitForAsyncUtils.waitForFxEvents();
+        long u16;
         try (Database db = Database.open(file)) {
             assertTrue(db.inTransaction(tx -> tx.measurers().all()).stream().anyMatch(m -> m.name().equals("Nell Sandpiper")));
-            var squads = db.inTransaction(tx -> tx.squads().all());
-            long u16 = squads.stream().filter(q -> q.name().equals("Under-16 development")).findFirst().orElseThrow().id();
-            long freya = db.inTransaction(tx -> tx.people().all()).stream()
-                    .filter(p -> p.displayName().equals("Freya Breakwater")).findFirst().orElseThrow().id();
-            var ms = db.inTransaction(tx -> tx.squads().membershipsOf(freya));
-            assertTrue(ms.stream().anyMatch(m -> m.squadId() == u16 && m.joinedOn().equals(java.time.LocalDate.of(2026, 10, 1))
-                    && m.leftOn() == null), ms.toString());
-            assertTrue(ms.stream().filter(m -> m.squadId() != u16).allMatch(m -> m.leftOn() != null), ms.toString());
+            u16 = db.inTransaction(tx -> tx.squads().all()).stream()
+                    .filter(q -> q.name().equals("Under-16 development")).findFirst().orElseThrow().id();
         }
-        // and she leaves at the end of the season
-        robot.clickOn("#move-squad");
-        WaitForAsyncUtils.waitForFxEvents();
-        robot.interact(() -> {
-            @SuppressWarnings("unchecked")
-            javafx.scene.control.ComboBox<org.shapetrail.store.Squad> to = robot.lookup("#move-to-squad")
-                    .queryAs(javafx.scene.control.ComboBox.class);
-            to.setValue(to.getItems().get(to.getItems().size() - 1));
-            robot.lookup("#move-from").queryAs(javafx.scene.control.DatePicker.class)
-                    .setValue(java.time.LocalDate.of(2027, 6, 30));
-        });
+        var ms = membershipsOf("Freya Breakwater");
+        assertTrue(ms.stream().anyMatch(m -> m.squadId() == u16 && m.joinedOn().equals(java.time.LocalDate.of(2026, 10, 1))
+                && m.leftOn() == null), ms.toString());
+        assertTrue(ms.stream().filter(m -> m.squadId() != u16).allMatch(m -> m.leftOn() != null), ms.toString());
+        // and she leaves at the end of the season: the last choice in the list
+        fillMove(robot, squads -> squads.get(squads.size() - 1), java.time.LocalDate.of(2027, 6, 30));
         assertTrue(robot.lookup("Last day").tryQuery().isPresent(), "the date is asked for as the last day");
         robot.clickOn("OK");
         WaitForAsyncUtils.waitForFxEvents();
-        try (Database db = Database.open(file)) {
-            long freya = db.inTransaction(tx -> tx.people().all()).stream()
-                    .filter(p -> p.displayName().equals("Freya Breakwater")).findFirst().orElseThrow().id();
-            assertTrue(db.inTransaction(tx -> tx.squads().membershipsOf(freya)).stream()
-                    .allMatch(m -> m.leftOn() != null && !m.leftOn().isAfter(java.time.LocalDate.of(2027, 6, 30))));
-        }
+        assertTrue(membershipsOf("Freya Breakwater").stream()
+                .allMatch(m -> m.leftOn() != null && !m.leftOn().isAfter(java.time.LocalDate.of(2027, 6, 30))));
     }
 
     @Test
