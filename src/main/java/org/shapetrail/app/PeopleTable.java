@@ -8,6 +8,7 @@ import javafx.scene.control.Label;
 import javafx.scene.control.TableCell;
 import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
+import javafx.scene.control.Tooltip;
 
 /** A sortable table of people rows, used by the people browser and the squad page. */
 final class PeopleTable {
@@ -26,7 +27,7 @@ final class PeopleTable {
         t.getColumns().add(text("Somatotype", PersonRow::rating, 85));
         TableColumn<PersonRow, PersonRow> change = new TableColumn<>("Latest change");
         change.setCellValueFactory(d -> new SimpleObjectProperty<>(d.getValue()));
-        change.setComparator(Comparator.comparingDouble(r -> Double.isNaN(r.latestSad()) ? -1 : r.latestSad()));
+        change.setComparator(Comparator.comparingDouble(r -> Double.isNaN(r.latestMultiple()) ? -1 : r.latestMultiple()));
         change.setCellFactory(c -> new TableCell<>() {
             @Override
             protected void updateItem(PersonRow r, boolean empty) {
@@ -37,7 +38,10 @@ final class PeopleTable {
                     return;
                 }
                 // the verdict in words, so nothing depends on colour alone
-                setText(Numbers.fmt(locale, r.latestSad(), 2) + " " + r.verdict().words());
+                setText(Numbers.fmt(locale, r.latestMultiple(), 2) + "× " + r.verdict().words());
+                setTooltip(new Tooltip("Moved SAD " + Numbers.fmt(locale, r.latestSad(), 2) + " somatotype units; the"
+                        + " change is " + Numbers.fmt(locale, r.latestMultiple(), 2) + " times the noise limit"
+                        + " (1.00 or more: beyond noise)"));
                 getStyleClass().add(switch (r.verdict()) {
                     case BEYOND_NOISE -> "beyond";
                     case BORDERLINE -> "borderline";

@@ -71,16 +71,29 @@ public record PersonPage(String title, List<String> profile, String latestChange
                     r.rating().map(s -> s.rating().toDisplayString()).orElse("—"),
                     r.rating().map(s -> s.category().displayName()).orElse(r.missing().isEmpty() ? ""
                             : "not rated: " + r.missing().get(0).message()),
-                    change.map(c -> "SAD " + Numbers.fmt(locale, c.verdict().sad(), 2)).orElse(""),
-                    change.map(c -> c.verdict().verdict().words() + " (noise alone: "
-                            + Numbers.fmt(locale, c.verdict().sadNoise95(), 2) + ")").orElse("")));
+                    change.map(c -> Numbers.fmt(locale, c.verdict().sad(), 2)).orElse(""),
+                    change.map(c -> cell(c.verdict(), locale)).orElse("")));
         }
         return new PersonPage(p.displayName(), profile, latest, lines, Charts.migration(h, true, locale, false));
     }
 
-    /** E.g. "beyond noise — SAD 1.09, where noise alone exceeds 0.27 in 5 % of pairs (Imogen Tarrant's own TEM)". */
+    /**
+     * E.g. "beyond noise: the change is 1.43 times the noise limit (1.00 is the limit; Imogen Tarrant's own
+     * TEM). Distance moved: SAD 0.27", with a sentence when the distance alone would suggest otherwise.
+     */
     public static String words(ChangeVerdict v, Locale locale) {
-        return v.verdict().words() + " — SAD " + Numbers.fmt(locale, v.sad(), 2) + ", where measurement noise alone"
-                + " exceeds " + Numbers.fmt(locale, v.sadNoise95(), 2) + " in 5 % of pairs (" + v.basis() + ")";
+        String s = v.verdict().words() + ": the change is " + v.multipleText(locale) + " times the noise limit (1.00 is"
+                + " the limit; " + v.basis() + "). Distance moved: SAD " + Numbers.fmt(locale, v.sad(), 2);
+        if (v.sadAloneDisagrees()) {
+            s += v.verdict() == org.shapetrail.noise.Verdict.BEYOND_NOISE
+                    ? ". A short move, but in a direction the measurer's repeat error rarely takes"
+                    : ". A long move, but in the direction the measurer's repeat error takes most";
+        }
+        return s;
+    }
+
+    /** A table cell: the shown noise multiple and the verdict it reads as, e.g. "1.43× beyond noise". */
+    public static String cell(ChangeVerdict v, Locale locale) {
+        return v.multipleText(locale) + "× " + v.verdict().words();
     }
 }

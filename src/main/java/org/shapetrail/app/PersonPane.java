@@ -62,8 +62,8 @@ public final class PersonPane extends BorderPane {
         column("Mass kg", VisitLine::mass, 70);
         column("Somatotype", VisitLine::rating, 100);
         column("Category", VisitLine::category, 150);
-        column("Change", VisitLine::change, 80);
-        column("Verdict", VisitLine::verdict, 200);
+        column("Moved (SAD)", VisitLine::change, 85);
+        column("Change ÷ noise limit", VisitLine::verdict, 170);
         visits.setPlaceholder(new Label("No visits yet"));
         editVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
         deleteVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());

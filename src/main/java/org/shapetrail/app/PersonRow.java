@@ -9,10 +9,11 @@ import org.shapetrail.noise.Verdict;
  * @param age decimal age at the latest visit (NaN without visits)
  * @param velocity latest stature velocity, cm/year (NaN when unknown)
  * @param latestSad SAD of the latest change (NaN without one)
+ * @param latestMultiple shown noise multiple of the latest change (NaN without one)
  * @param verdict verdict of the latest change, or null
  * @param maturity maturity status, or null (adults, missing sites)
  */
 public record PersonRow(long id, String name, String squad, double age, String rating, String category,
-                        double latestSad, Verdict verdict, double velocity, boolean rapidGrowth,
+                        double latestSad, double latestMultiple, Verdict verdict, double velocity, boolean rapidGrowth,
                         MaturityStatus maturity) {
 }

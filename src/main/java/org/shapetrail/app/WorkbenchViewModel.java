@@ -167,7 +167,8 @@ public final class WorkbenchViewModel {
         return new PersonRow(p.id(), p.displayName(), squadName, last.map(v -> v.ageYears()).orElse(Double.NaN),
                 lastRated == null ? "" : lastRated.somatotype().rating().toDisplayString(),
                 lastRated == null ? "" : lastRated.somatotype().category().displayName(),
-                change.map(c -> c.verdict().sad()).orElse(Double.NaN), change.map(c -> c.verdict().verdict()).orElse(null),
+                change.map(c -> c.verdict().sad()).orElse(Double.NaN),
+                change.map(c -> c.verdict().shownMultiple()).orElse(Double.NaN), change.map(c -> c.verdict().verdict()).orElse(null),
                 g.velocity().map(v -> v.perYear()).orElse(Double.NaN), g.rapidGrowth(),
                 g.maturityEstimate().map(m -> m.status()).orElse(null));
     }

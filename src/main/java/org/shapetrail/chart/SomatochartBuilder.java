@@ -318,6 +318,44 @@ public final class SomatochartBuilder {
         return this;
     }
 
+    /**
+     * A change drawn against its noise limit: around the earlier rating, the shadow on the chart of the
+     * ellipsoid where measurement noise alone ends in 95 % of cases (D² = χ²₀.₉₅(3) of the combined
+     * covariance of both visits, projected: the shadow of {x: xᵀΣ⁻¹x ≤ k} under A is {y: yᵀ(AΣAᵀ)⁻¹y ≤ k});
+     * then the step, styled by its verdict. A step ending outside the shadow is beyond noise; one ending
+     * inside can still be beyond, when part of it is an equal rise or fall of all three components, which
+     * the flat chart cannot show.
+     */
+    public SomatochartBuilder changeAgainstNoise(org.shapetrail.noise.ChangeVerdict v,
+                                                 ComponentCovariance combined, String fromLabel,
+                                                 String toLabel) {
+        String colour = Palette.series(series++);
+        Point from = pt(v.from());
+        Point to = pt(v.to());
+        under.add(new Primitive.Path(Ellipses.polygon(from.x(), from.y(), combined.chartCovariance(),
+                Verdict.BEYOND_D2, 72), true, new Style(Palette.NOISE, 0.8, new double[0], Palette.NOISE, 0.35)));
+        under.add(new Primitive.Segment(from, to, true, stepStyle(v.verdict(), colour)));
+        over.add(new Primitive.Marker(from, MarkerShape.CIRCLE, 7, Style.filled(Palette.PAPER, colour, 1.6), null,
+                fromLabel));
+        over.add(new Primitive.Marker(to, MarkerShape.CIRCLE, 9, Style.filled(colour, Palette.INK, 1), null, toLabel));
+        reserved.add(new Object[] {from, 9.0});
+        reserved.add(new Object[] {to, 9.0});
+        wanted.add(new Object[] {from, fromLabel, 8.0, colour});
+        wanted.add(new Object[] {to, toLabel, 8.0, colour});
+        return this;
+    }
+
+    /** Whether a change's end lies outside the shadow drawn by {@link #changeAgainstNoise}. */
+    public static boolean leavesNoiseShadow(org.shapetrail.noise.ChangeVerdict v,
+                                            ComponentCovariance combined) {
+        double[][] c = combined.chartCovariance();
+        double dx = v.to().chartPoint().x() - v.from().chartPoint().x();
+        double dy = v.to().chartPoint().y() - v.from().chartPoint().y();
+        double det = c[0][0] * c[1][1] - c[0][1] * c[1][0];
+        double q = (dx * dx * c[1][1] - 2 * dx * dy * c[0][1] + dy * dy * c[0][0]) / det;
+        return q > Verdict.BEYOND_D2;
+    }
+
     /** Number of labels left out for lack of room. */
     public int droppedLabels() {
         return labels == null ? 0 : labels.dropped();

@@ -55,14 +55,14 @@ final class BlockReportCommand implements Callable<Integer> {
             r = BlockReview.of(HistoryBuilder.of(a, AnalysisSettings.standard()), b, window);
             squad = a.squad(b.squadId()).map(s -> s.name()).orElse("");
         }
-        Table athletes = new Table("name", "before_date", "after_date", "before", "after", "sad", "sad_noise_95",
-                "meso_change", "verdict", "repeatability");
+        Table athletes = new Table("name", "before_date", "after_date", "before", "after", "noise_multiple",
+                "verdict", "sad", "meso_change", "meso_mdc95", "repeatability");
         for (BlockReview.Athlete x : r.athletes()) {
             athletes.row(x.person().displayName(), x.before().visit().measuredAt().toLocalDate(),
                     x.after().visit().measuredAt().toLocalDate(), x.change().from().toDisplayString(),
-                    x.change().to().toDisplayString(), Table.num(x.change().sad(), 2),
-                    Table.num(x.change().sadNoise95(), 2), Table.num(x.change().change()[1], 2),
-                    x.change().verdict().words(), x.change().basis());
+                    x.change().to().toDisplayString(), x.change().multipleText(java.util.Locale.ROOT),
+                    x.change().verdict().words(), Table.num(x.change().sad(), 2), Table.num(x.change().change()[1], 2),
+                    Table.num(x.change().mdc95()[1], 2), x.change().basis());
         }
         if (output.format == OutputFormat.TEXT) {
             out.println(r.block().name() + " (" + squad + "), " + r.block().startsOn() + " to " + r.block().endsOn()

@@ -40,9 +40,9 @@ final class ChangesCommand implements Callable<Integer> {
             Person p = Lookup.person(a, personId);
             h = HistoryBuilder.of(a, AnalysisSettings.standard()).history(p);
         }
-        Table t = new Table("from", "to", "from_rating", "to_rating", "sad", "sad_noise_95", "d2", "p",
-                "endo_change", "endo_mdc95", "meso_change", "meso_mdc95", "ecto_change", "ecto_mdc95", "verdict",
-                "repeatability");
+        Table t = new Table("from", "to", "from_rating", "to_rating", "noise_multiple", "verdict", "sad", "d2", "p",
+                "endo_change", "endo_mdc95", "endo_beyond_mdc95", "meso_change", "meso_mdc95", "meso_beyond_mdc95",
+                "ecto_change", "ecto_mdc95", "ecto_beyond_mdc95", "repeatability");
         for (PersonHistory.Change c : h.changes()) {
             add(t, c.from().visit().measuredAt().toLocalDate().toString(),
                     c.to().visit().measuredAt().toLocalDate().toString(), c.verdict());
@@ -60,10 +60,14 @@ final class ChangesCommand implements Callable<Integer> {
     }
 
     private static void add(Table t, String from, String to, ChangeVerdict v) {
-        t.row(from, to, v.from().toDisplayString(), v.to().toDisplayString(), Table.num(v.sad(), 2),
-                Table.num(v.sadNoise95(), 2), Table.num(v.d2(), 2), Table.num(v.pValue(), 4),
-                Table.num(v.change()[0], 2), Table.num(v.mdc95()[0], 2), Table.num(v.change()[1], 2),
-                Table.num(v.mdc95()[1], 2), Table.num(v.change()[2], 2), Table.num(v.mdc95()[2], 2),
-                v.verdict().words(), v.basis());
+        t.row(from, to, v.from().toDisplayString(), v.to().toDisplayString(), v.multipleText(java.util.Locale.ROOT),
+                v.verdict().words(), Table.num(v.sad(), 2), Table.num(v.d2(), 2), Table.num(v.pValue(), 4),
+                Table.num(v.change()[0], 2), Table.num(v.mdc95()[0], 2), yesNo(v.componentBeyond(0)),
+                Table.num(v.change()[1], 2), Table.num(v.mdc95()[1], 2), yesNo(v.componentBeyond(1)),
+                Table.num(v.change()[2], 2), Table.num(v.mdc95()[2], 2), yesNo(v.componentBeyond(2)), v.basis());
+    }
+
+    private static String yesNo(boolean b) {
+        return b ? "yes" : "no";
     }
 }

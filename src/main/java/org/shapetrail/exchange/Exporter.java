@@ -86,7 +86,7 @@ public final class Exporter {
             header.add(base);
         }
         header.addAll(List.of("endomorphy", "mesomorphy", "ectomorphy", "x", "y", "category", "change_sad",
-                "sad_noise_95", "change_d2", "change_verdict", "repeatability"));
+                "change_noise_multiple", "change_d2", "change_verdict", "repeatability"));
         p.printRecord(header);
         int rows = 0;
         for (Person person : b.academy().people()) {
@@ -111,7 +111,7 @@ public final class Exporter {
                     row.addAll(List.of("", "", "", "", "", ""));
                 }
                 row.add(change.map(c -> n(c.verdict().sad(), 4)).orElse(""));
-                row.add(change.map(c -> n(c.verdict().sadNoise95(), 4)).orElse(""));
+                row.add(change.map(c -> c.verdict().multipleText(Locale.ROOT)).orElse(""));
                 row.add(change.map(c -> n(c.verdict().d2(), 3)).orElse(""));
                 row.add(change.map(c -> c.verdict().verdict().words()).orElse(""));
                 row.add(change.map(c -> CsvSafety.text(c.verdict().basis())).orElse(""));

@@ -1,5 +1,7 @@
 package org.shapetrail.letters;
 
+import java.math.BigDecimal;
+import java.math.RoundingMode;
 import java.time.LocalDate;
 import java.time.format.DateTimeFormatter;
 import java.time.format.FormatStyle;
@@ -82,13 +84,13 @@ public final class LetterComposer {
             sections.add(growth(h, visits, first));
             sections.add(shape(h, visits, first, skinfolds));
         }
-        blockSection(h, first).ifPresent(sections::add);
+        blockSection(h, first, skinfolds).ifPresent(sections::add);
         sections.add(new Letter.Section("What these numbers mean, and what they do not", List.of(
                 "They describe body shape and size on the days of measuring. Shape changes with growth, training and"
                         + " time; there is no right or wrong shape for a sport or for a person.",
-                "Every measurement has a small error. We say a change is beyond measurement error only when it is"
-                        + " larger than what the measurer's own repeat measurements would produce by chance in 19 out"
-                        + " of 20 cases.")));
+                "Every measurement has a small error. We call a change larger than the measurer's repeat error"
+                        + " would usually give only when the measurer's own repeat measurements would produce a change"
+                        + " that large by chance in fewer than 1 case in 20.")));
         String who = settings.sender() + (settings.senderRole().isBlank() ? "" : " (" + settings.senderRole() + ")");
         sections.add(new Letter.Section("Questions", List.of("Please contact " + who + ", " + settings.contact()
                 + ", or your family doctor.")));
@@ -97,7 +99,7 @@ public final class LetterComposer {
             List<String> head = new ArrayList<>(List.of("Date", "Age", "Height (cm)", "Muscle & bone",
                     "Slenderness"));
             if (skinfolds) {
-                head.add("Skinfolds");
+                head.add("Skinfold rating");
             }
             table.add(head);
             for (VisitResult r : visits) {
@@ -160,10 +162,10 @@ public final class LetterComposer {
 
     private Letter.Section shape(PersonHistory h, List<VisitResult> visits, String first, boolean skinfolds) {
         List<String> ps = new ArrayList<>();
-        ps.add("Body shape is described by three numbers, each on a scale from about 1 to 7: muscle and bone build,"
-                + " slenderness (how long and lean the build is for its height)"
-                + (skinfolds ? ", and skinfold thickness under the skin." : ". At this age we describe only these"
-                + " two."));
+        ps.add(SCALE + (skinfolds ? " They are muscle and bone build, slenderness (how long and lean the build is for"
+                + " its height) and a skinfold rating (from the thickness of skinfolds under the skin)."
+                : " They are muscle and bone build and slenderness (how long and lean the build is for its height);"
+                + " at this age we describe only these two."));
         List<VisitResult> rated = visits.stream().filter(r -> r.somatotype() != null).toList();
         if (rated.isEmpty()) {
             ps.add("None of the measurements in this period was complete enough to describe body shape.");
@@ -172,33 +174,106 @@ public final class LetterComposer {
         VisitResult a = rated.get(0);
         VisitResult b = rated.get(rated.size() - 1);
         Rating ra = a.somatotype().rating();
-        Rating rb = b.somatotype().rating();
         if (rated.size() == 1) {
             ps.add("On " + a.visit().measuredAt().toLocalDate().format(dates) + ": muscle and bone build "
                     + n(ra.mesomorphy(), 1) + ", slenderness " + n(ra.ectomorphy(), 1)
-                    + (skinfolds ? ", skinfold thickness " + n(ra.endomorphy(), 1) : "") + ".");
+                    + (skinfolds ? ", skinfold rating " + n(ra.endomorphy(), 1) : "") + ".");
             return new Letter.Section("Body shape", ps);
         }
         ps.add("From " + a.visit().measuredAt().toLocalDate().format(dates) + " to " + b.visit().measuredAt()
-                .toLocalDate().format(dates) + ": muscle and bone build went from " + n(ra.mesomorphy(), 1) + " to "
-                + n(rb.mesomorphy(), 1) + ", slenderness from " + n(ra.ectomorphy(), 1) + " to " + n(rb.ectomorphy(), 1)
-                + (skinfolds ? ", skinfold thickness from " + n(ra.endomorphy(), 1) + " to " + n(rb.endomorphy(), 1) : "")
-                + ".");
-        ChangeVerdict v = builder.verdict(a, b);
-        ps.add(switch (v.verdict()) {
-            case BEYOND_NOISE -> "This change is larger than measurement error: it is a real change in body shape.";
-            case BORDERLINE -> "This change is close to the size of measurement error, so it may or may not be real.";
-            case WITHIN_NOISE -> "This change is within measurement error: it may be no real change at all.";
-        });
+                .toLocalDate().format(dates) + ":");
+        ps.addAll(componentSentences(builder.verdict(a, b), skinfolds));
         if (skinfolds) {
             ps.add("The chart shows each measurement as a point, joined in time order; a solid line marks a step"
-                    + " larger than measurement error, dotted and dashed lines steps within or close to it.");
+                    + " larger than the measurer's repeat error would usually give for the three ratings together,"
+                    + " dashed and dotted lines steps close to it or within it.");
         }
         return new Letter.Section("Body shape", ps);
     }
 
+    /** What the letter says of the ratings' scale; no printed rating lies outside it (ratings are never below 0.1). */
+    public static final String SCALE = "Body shape is described by ratings that start at 0.1 and have no fixed top;"
+            + " most people lie between about 1 and 7.";
+
+    /** How a letter reads one rating's change against the measurer's repeat error, judged on printed numbers too. */
+    public enum ComponentReading {
+        /** Beyond its MDC95, and the printed change is larger than the printed error. */
+        LARGER(": larger than the measurer's repeat error would usually give (up to about %s)."),
+        /** Within its MDC95, and the printed change is no larger than the printed error. */
+        WITHIN(": within the measurer's repeat error (up to about %s), so it may be no real change at all."),
+        /** The exact figures and the printed ones would tell different stories: said plainly. */
+        CLOSE(": about the size of the measurer's repeat error (up to about %s), so it may or may not be a real"
+                + " change.");
+
+        private final String pattern;
+
+        ComponentReading(String pattern) {
+            this.pattern = pattern;
+        }
+
+        /** The reading's words with the printed repeat error. */
+        public String words(String error) {
+            return String.format(Locale.ROOT, pattern, error);
+        }
+
+        /**
+         * The reading of a change: LARGER only when it is beyond its MDC95 and the printed numbers show more
+         * than the printed error; WITHIN only when it is not and the printed numbers agree; CLOSE otherwise.
+         */
+        public static ComponentReading of(boolean beyond, BigDecimal printedChange, BigDecimal printedError) {
+            int cmp = printedChange.abs().compareTo(printedError);
+            if (beyond && cmp > 0) {
+                return LARGER;
+            }
+            if (!beyond && cmp <= 0) {
+                return WITHIN;
+            }
+            return CLOSE;
+        }
+    }
+
+    /** The printed form of a value: one decimal, half up (as {@code %.1f} prints it). */
+    static BigDecimal printed(double v) {
+        return new BigDecimal(v).setScale(1, RoundingMode.HALF_UP);
+    }
+
+    /** The printed repeat error: one decimal, never shown below 0.1. */
+    static BigDecimal printedError(double mdc95) {
+        return printed(mdc95).max(new BigDecimal("0.1"));
+    }
+
+    /**
+     * One sentence per rating the letter shows, each with the printed values, the printed change (the
+     * difference of the printed values, so the reader's sum comes out), the printed repeat error and its
+     * reading. The verdict on the three ratings together is not used: it would speak of a rating the letter
+     * may leave out.
+     */
+    private List<String> componentSentences(ChangeVerdict v, boolean skinfolds) {
+        List<String> out = new ArrayList<>();
+        int[] shown = skinfolds ? new int[] {1, 2, 0} : new int[] {1, 2};
+        for (int c : shown) {
+            double from = c == 0 ? v.from().endomorphy() : c == 1 ? v.from().mesomorphy() : v.from().ectomorphy();
+            double to = c == 0 ? v.to().endomorphy() : c == 1 ? v.to().mesomorphy() : v.to().ectomorphy();
+            BigDecimal pf = printed(from);
+            BigDecimal pt = printed(to);
+            BigDecimal change = pt.subtract(pf);
+            BigDecimal error = printedError(v.mdc95()[c]);
+            ComponentReading reading = ComponentReading.of(v.componentBeyond(c), change, error);
+            String name = COMPONENT_NAMES.get(c);
+            String moved = change.signum() == 0 ? name + " stayed at " + n(to, 1)
+                    : name + " went from " + n(from, 1) + " to " + n(to, 1) + ", a change of " + n(change.doubleValue(), 1);
+            out.add(Character.toUpperCase(moved.charAt(0)) + moved.substring(1)
+                    + reading.words(n(error.doubleValue(), 1)));
+        }
+        return out;
+    }
+
+    /** The letter's names of the ratings, by component index (endo, meso, ecto). */
+    public static final List<String> COMPONENT_NAMES = List.of("skinfold rating", "muscle and bone build",
+            "slenderness");
+
     /** A paragraph on each training block of the period the person took part in (visits near both ends). */
-    private java.util.Optional<Letter.Section> blockSection(PersonHistory h, String first) {
+    private java.util.Optional<Letter.Section> blockSection(PersonHistory h, String first, boolean skinfolds) {
         List<String> ps = new ArrayList<>();
         for (var block : builder.academy().blocks()) {
             if (block.endsOn().isBefore(settings.from()) || block.startsOn().isAfter(settings.to())) {
@@ -214,15 +289,11 @@ public final class LetterComposer {
                     org.shapetrail.history.BlockReview.DEFAULT_WINDOW_DAYS, p -> p.id() == h.person().id() ? h
                             : histories.computeIfAbsent(p.id(), id -> builder.history(p)));
             review.athletes().stream().filter(a -> a.person().id() == h.person().id()).findFirst().ifPresent(a -> {
-                String words = switch (a.change().verdict()) {
-                    case BEYOND_NOISE -> "a change in body shape larger than measurement error";
-                    case BORDERLINE -> "a change close to the size of measurement error";
-                    case WITHIN_NOISE -> "no change beyond measurement error";
-                };
                 ps.add(first + " took part in the " + block.name() + " (" + block.startsOn().format(dates) + " to "
-                        + block.endsOn().format(dates) + "). Measured before and after it, " + first + " showed "
-                        + words + ": muscle and bone build " + n(a.change().from().mesomorphy(), 1) + " to "
-                        + n(a.change().to().mesomorphy(), 1) + ".");
+                        + block.endsOn().format(dates) + "). Measured before it (" + a.before().visit().measuredAt()
+                        .toLocalDate().format(dates) + ") and after it (" + a.after().visit().measuredAt().toLocalDate()
+                        .format(dates) + "):");
+                ps.addAll(componentSentences(a.change(), skinfolds));
             });
         }
         return ps.isEmpty() ? java.util.Optional.empty()

@@ -41,7 +41,7 @@ public final class ChangeAssessment {
             mdc[i] = 1.96 * Math.sqrt(s[i][i]);
         }
         return new ChangeVerdict(a, b, Distances.sad(a, b), sadQuantile95(s), d2, chiSquared3Survival(d2), d, mdc,
-                Verdict.of(d2), basis);
+                basis);
     }
 
     /** Δᵀ S⁻¹ Δ for a symmetric 3×3 S; a singular S is regularised by 1e-9 of its trace. */
