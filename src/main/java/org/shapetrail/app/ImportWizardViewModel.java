@@ -115,7 +115,7 @@ public final class ImportWizardViewModel {
         ImportOptions o = new ImportOptions(decimals.get(), monthFirst.get(), createMissing.get());
         summary.set("Checking " + file.getFileName() + " …");
         runner.run("Checking the file", () -> {
-            try (Database db = Database.open(database)) {
+            try (Database db = Database.openExisting(database)) {
                 return Importer.dryRun(file, Academy.load(db), o, cols);
             }
         }, this::showPlan, t -> summary.set(Errors.describe(t)));
@@ -130,7 +130,7 @@ public final class ImportWizardViewModel {
         canCommit.set(false);
         summary.set("Importing …");
         runner.run("Importing", () -> {
-            try (Database db = Database.open(database)) {
+            try (Database db = Database.openExisting(database)) {
                 return Importer.commit(db, p);
             }
         }, n -> {
@@ -150,7 +150,7 @@ public final class ImportWizardViewModel {
     /** The dry run with the current mapping and options, on the calling thread; nothing is written. */
     public void dryRun() {
         ImportPlan p;
-        try (Database db = Database.open(database)) {
+        try (Database db = Database.openExisting(database)) {
             p = Importer.dryRun(file, Academy.load(db),
                     new ImportOptions(decimals.get(), monthFirst.get(), createMissing.get()), currentColumns());
         }
@@ -161,10 +161,8 @@ public final class ImportWizardViewModel {
         plan.set(p);
         summary.set(p.summary());
         List<String> lines = new ArrayList<>();
-        for (ImportPlan.RowReport r : p.rows()) {
-            if (r.outcome() != ImportPlan.Outcome.IMPORTED) {
-                lines.add("line " + r.line() + ": " + r.outcome().words() + " — " + r.reason());
-            }
+        for (ImportPlan.Finding f : p.findings()) {
+            lines.add(f.describe());
         }
         if (lines.isEmpty() && p.fileProblems().isEmpty()) {
             lines.add("Every row can be imported.");

@@ -23,7 +23,7 @@ final class Organising {
         if (n.isEmpty()) {
             return Optional.of("The measurer needs a name.");
         }
-        try (Database db = Database.open(file)) {
+        try (Database db = Database.openExisting(file)) {
             return db.inTransaction(tx -> {
                 if (tx.measurers().all().stream().anyMatch(m -> same(m.name(), n))) {
                     return Optional.of("There is already a measurer called " + n + " in this file.");
@@ -39,7 +39,7 @@ final class Organising {
         if (n.isEmpty()) {
             return Optional.of("The squad needs a name.");
         }
-        try (Database db = Database.open(file)) {
+        try (Database db = Database.openExisting(file)) {
             return db.inTransaction(tx -> {
                 if (tx.squads().all().stream().anyMatch(s -> same(s.name(), n))) {
                     return Optional.of("There is already a squad called " + n + " in this file.");
@@ -61,7 +61,7 @@ final class Organising {
         if (from == null) {
             return Optional.of("Choose the day the person joins " + squad.name() + ".");
         }
-        try (Database db = Database.open(file)) {
+        try (Database db = Database.openExisting(file)) {
             return db.inTransaction(tx -> {
                 java.util.List<Membership> open = tx.squads().membershipsOf(personId).stream()
                         .filter(m -> m.leftOn() == null || !m.leftOn().isBefore(from)).toList();
@@ -91,7 +91,7 @@ final class Organising {
         if (lastDay == null) {
             return Optional.of("Choose the last day in the squad.");
         }
-        try (Database db = Database.open(file)) {
+        try (Database db = Database.openExisting(file)) {
             return db.inTransaction(tx -> {
                 java.util.List<Membership> open = tx.squads().membershipsOf(personId).stream()
                         .filter(m -> m.leftOn() == null || m.leftOn().isAfter(lastDay)).toList();

@@ -110,6 +110,9 @@ public final class PersonFormViewModel {
         List<String> out = new ArrayList<>();
         if (name.get() == null || name.get().isBlank()) {
             out.add("Enter the person's name.");
+        } else {
+            org.shapetrail.store.TextRules.problem(org.shapetrail.store.TextRules.Field.PERSON_NAME, name.get().strip())
+                    .ifPresent(w -> out.add(Character.toUpperCase(w.charAt(0)) + w.substring(1) + "."));
         }
         if (sex.get() == null) {
             out.add("Choose the sex recorded for the growth equations.");
@@ -141,7 +144,7 @@ public final class PersonFormViewModel {
         Squad joins = squad.get();
         try {
             return Optional.of(OffFxThread.call(saving, () -> {
-                try (Database db = Database.open(file)) {
+                try (Database db = Database.openExisting(file)) {
                     return db.inTransaction(tx -> {
                         if (editing == null) {
                             Person saved = tx.people().insert(c.person());

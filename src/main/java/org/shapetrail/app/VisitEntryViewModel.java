@@ -134,6 +134,7 @@ public final class VisitEntryViewModel {
         }
         date.addListener(o -> evaluate());
         measurer.addListener(o -> evaluate());
+        context.addListener(o -> evaluate());
         for (StringProperty p : List.of(raterEndo, raterMeso, raterEcto, raterName)) {
             p.addListener(o -> evaluate());
         }
@@ -219,10 +220,12 @@ public final class VisitEntryViewModel {
         }
         if (date.get() == null) {
             found.add(new Problem(null, ProblemKind.MISSING, "Enter the date of the visit."));
-        } else if (date.get().isBefore(person.birthDate())) {
-            found.add(new Problem(null, ProblemKind.INCONSISTENT, "The visit date is before " + person.displayName()
-                    + "'s date of birth."));
+        } else {
+            org.shapetrail.measure.VisitDate.check(person.birthDate(), date.get(), LocalDate.now()).ifPresent(found::add);
         }
+        org.shapetrail.store.TextRules.problem(org.shapetrail.store.TextRules.Field.CONTEXT, context.get())
+                .ifPresent(w -> found.add(new Problem(null, ProblemKind.UNUSABLE_TEXT,
+                        Character.toUpperCase(w.charAt(0)) + w.substring(1) + ".")));
         Rating rater = raterRating(found);
         problems.setAll(found.stream().map(Problem::message).toList());
         canSave.set(found.isEmpty());
@@ -270,8 +273,9 @@ public final class VisitEntryViewModel {
             raterComparison.set("Rater's " + rater.toDisplayString() + " lies at SAD "
                     + Numbers.fmt(locale, Distances.sad(r, rater), 2) + " from the anthropometric rating.");
         }
-        if (measurer.get() == null || date.get() == null) {
-            return;
+        if (measurer.get() == null || date.get() == null
+                || found.stream().anyMatch(p -> p.kind() == ProblemKind.IMPOSSIBLE_DATE)) {
+            return; // no verdict against a date that cannot be
         }
         Visit draft = draft(trials);
         VisitResult now = builder.result(person, draft);
@@ -319,7 +323,7 @@ public final class VisitEntryViewModel {
         RatingMethod method = raterMethod.get();
         try {
             Visit saved = OffFxThread.call(saving, () -> {
-                try (Database db = Database.open(file)) {
+                try (Database db = Database.openExisting(file)) {
                     return db.inTransaction(tx -> {
                         Visit s;
                         if (editing == null) {

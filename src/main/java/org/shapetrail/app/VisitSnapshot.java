@@ -15,7 +15,7 @@ import org.shapetrail.store.VisitRating;
 record VisitSnapshot(Visit visit, VisitRating rating) {
     /** The stored visit {@code visitId} with its rating, read in one transaction. */
     static Optional<VisitSnapshot> read(Path file, long visitId) {
-        try (Database db = Database.open(file)) {
+        try (Database db = Database.openExisting(file)) {
             return db.inTransaction(tx -> {
                 Optional<Visit> v = tx.visits().find(visitId);
                 return v.isEmpty() ? Optional.<VisitSnapshot>empty()
@@ -26,7 +26,7 @@ record VisitSnapshot(Visit visit, VisitRating rating) {
 
     /** Undoes an edit: the visit gets back its fields, trials and rating (or none), under the same id. */
     void restoreEdited(Path file) {
-        try (Database db = Database.open(file)) {
+        try (Database db = Database.openExisting(file)) {
             db.inTransaction(tx -> {
                 tx.visits().update(visit);
                 if (rating == null) {
@@ -41,7 +41,7 @@ record VisitSnapshot(Visit visit, VisitRating rating) {
 
     /** Undoes a deletion: the visit is saved again (under a new id) with its rating. */
     Visit restoreDeleted(Path file) {
-        try (Database db = Database.open(file)) {
+        try (Database db = Database.openExisting(file)) {
             return db.inTransaction(tx -> {
                 Visit back = tx.visits().insert(visit.withId(0));
                 if (rating != null) {

@@ -697,7 +697,7 @@ public final class Workbench {
             try {
                 before = OffFxThread.call(storing, () -> {
                     Optional<VisitSnapshot> snap = VisitSnapshot.read(file, v.id());
-                    try (Database db = Database.open(file)) {
+                    try (Database db = Database.openExisting(file)) {
                         db.inTransaction(tx -> tx.visits().delete(v.id()));
                     }
                     return snap;

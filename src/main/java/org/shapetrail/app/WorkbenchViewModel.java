@@ -93,7 +93,7 @@ public final class WorkbenchViewModel {
     /** Reads and computes a whole file (runs off the FX thread). */
     static Loaded load(Path file, AnalysisSettings s, TaskRunner.Progress progress) throws InterruptedException {
         Academy academy;
-        try (Database db = Database.open(file)) {
+        try (Database db = Database.openExisting(file)) {
             academy = Academy.load(db);
         }
         HistoryBuilder b = HistoryBuilder.of(academy, s);

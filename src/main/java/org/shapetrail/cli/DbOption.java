@@ -8,8 +8,8 @@ import picocli.CommandLine.Option;
 /** The {@code --db FILE} option shared by every command that reads or writes a Shapetrail file. */
 final class DbOption {
     @Option(names = "--db", paramLabel = "FILE",
-            description = "Shapetrail file to use (default: the file in your data folder, seeded with the demo"
-                    + " academy on first use).")
+            description = "Shapetrail file to use; it must exist (default: the file in your data folder, seeded"
+                    + " with the demo academy on first use).")
     Path file;
 
     /** The chosen file, or the default one (copied from the demo database if it does not exist yet). */
@@ -22,7 +22,8 @@ final class DbOption {
         return f;
     }
 
+    /** Opens the chosen file, which must exist (nothing is created for a mistyped path), or the default one. */
     Database open() {
-        return Database.open(resolve());
+        return Database.openExisting(resolve());
     }
 }

@@ -60,13 +60,13 @@ final class ImportCommand implements Callable<Integer> {
                 spec.commandLine().getErr().println(plan.summary());
                 return 2;
             }
-            for (ImportPlan.RowReport r : plan.rows()) {
-                boolean list = show.equals("all") || (show.equals("rejected")
-                        && r.outcome() != ImportPlan.Outcome.IMPORTED);
-                if (list) {
+            if (show.equals("all")) {
+                for (ImportPlan.RowReport r : plan.rows()) {
                     out.println("line " + r.line() + ": " + r.outcome().words() + (r.reason().isEmpty() ? ""
                             : " — " + r.reason()));
                 }
+            } else if (show.equals("rejected")) {
+                plan.findings().forEach(f -> out.println(f.describe()));
             }
             out.println(plan.summary());
             if (!commit) {

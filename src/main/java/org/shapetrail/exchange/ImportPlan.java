@@ -31,6 +31,38 @@ public final class ImportPlan {
     public record RowReport(long line, Outcome outcome, String reason) {
     }
 
+    /** Rows with one outcome and reason: a row of its own, or all the rows of one visit. */
+    public record Finding(List<Long> lines, Outcome outcome, String reason) {
+        public Finding {
+            lines = List.copyOf(lines);
+        }
+
+        /** "line 7", "lines 5–14" or "lines 3, 8–9": runs of following lines joined. */
+        public String where() {
+            StringBuilder sb = new StringBuilder(lines.size() == 1 ? "line " : "lines ");
+            for (int i = 0; i < lines.size(); ) {
+                int j = i;
+                while (j + 1 < lines.size() && lines.get(j + 1) == lines.get(j) + 1) {
+                    j++;
+                }
+                if (i > 0) {
+                    sb.append(", ");
+                }
+                sb.append(lines.get(i));
+                if (j > i) {
+                    sb.append('–').append(lines.get(j));
+                }
+                i = j + 1;
+            }
+            return sb.toString();
+        }
+
+        /** E.g. "lines 5–14: rejected — Triceps trial 2 …". */
+        public String describe() {
+            return where() + ": " + outcome.words() + (reason.isEmpty() ? "" : " — " + reason);
+        }
+    }
+
     /**
      * A visit to be written: the person is either existing (personId &gt; 0) or one of {@link #newPeople()}
      * (newPersonIndex ≥ 0); likewise the measurer.
@@ -81,6 +113,11 @@ public final class ImportPlan {
     /** Every data row in file order, with its outcome; made on demand, so a million rows cost little. */
     public List<RowReport> rows() {
         return rows;
+    }
+
+    /** The rows not imported, each visit once with all its lines (see {@link Finding}). */
+    public List<Finding> findings() {
+        return rows.findings();
     }
 
     public List<PlannedVisit> visits() {

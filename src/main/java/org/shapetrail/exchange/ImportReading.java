@@ -21,8 +21,10 @@ import org.shapetrail.measure.Site;
 import org.shapetrail.measure.SiteTrials;
 import org.shapetrail.measure.ValueParser;
 import org.shapetrail.measure.VisitCheck;
+import org.shapetrail.measure.VisitDate;
 import org.shapetrail.store.Measurer;
 import org.shapetrail.store.Person;
+import org.shapetrail.store.TextRules;
 import org.shapetrail.store.Visit;
 
 /**
@@ -54,6 +56,7 @@ final class ImportReading {
     private final Map<String, Integer> newPeopleIndex = new HashMap<>();
     private final List<String> newMeasurers = new ArrayList<>();
     private final RowLog log = new RowLog();
+    private final LocalDate today = LocalDate.now();
     // a large file repeats the same names, dates and sites on every row: work each out once
     private final Map<String, String> folded = new HashMap<>();
     private final Map<String, Optional<Site>> sitesByText = new HashMap<>();
@@ -468,37 +471,63 @@ final class ImportReading {
     private Head head(CsvRows rec, List<String> why) {
         long personId = 0;
         int newIndex = -1;
-        String idText = cell(rec, Column.Role.PERSON_ID);
+        String idText = cell(rec, Column.Role.PERSON_ID).strip();
         String name = cell(rec, Column.Role.NAME).strip();
         String dobText = cell(rec, Column.Role.BIRTH_DATE);
+        String sexText = cell(rec, Column.Role.SEX).strip();
         Person known = null;
-        if (!idText.isBlank() && col(Column.Role.NAME).isEmpty()) {
+        LocalDate birth = null;
+        Person byId = null;
+        boolean idGiven = !idText.isEmpty() && col(Column.Role.PERSON_ID).isPresent();
+        if (idGiven) {
             try {
-                known = peopleById.get(Long.parseLong(idText.strip()));
-                if (known == null) {
-                    why.add("there is no person with id " + idText.strip() + " in the file");
-                }
+                byId = peopleById.get(Long.parseLong(idText));
             } catch (NumberFormatException e) {
                 why.add("person id \"" + idText + "\" is not a number");
+            }
+        }
+        if (col(Column.Role.NAME).isEmpty()) {
+            known = byId;
+            if (idGiven && byId == null && why.isEmpty()) {
+                why.add("there is no person with id " + idText + " in the file");
+            } else if (!idGiven) {
+                why.add("the person id is empty");
             }
         } else {
             LocalDate dob = date(dobText, "date of birth", why);
             if (name.isEmpty()) {
                 why.add("the name is empty");
             }
-            if (dob != null && !name.isEmpty()) {
+            TextRules.problem(TextRules.Field.PERSON_NAME, name).ifPresent(why::add);
+            if (dob != null && !name.isEmpty() && why.isEmpty()) {
                 String key = foldCached(name) + "|" + dob;
-                known = peopleByKey.get(key);
-                if (known == null) {
+                Person byName = peopleByKey.get(key);
+                if (idGiven && byId == null && byName != null) {
+                    why.add("person id " + idText + " is not in the file, but the name and date of birth are those of"
+                            + " person " + byName.id() + " (" + byName.displayName() + "); correct the id, or leave it"
+                            + " empty to match by name");
+                } else if (byId != null && byName != byId) {
+                    why.add("person id " + idText + " is " + byId.displayName() + " (born " + byId.birthDate()
+                            + "), but the row names " + name + " (born " + dob + ")"
+                            + (byName == null ? "" : ", who is person " + byName.id())
+                            + "; correct the id or the name and date of birth");
+                } else {
+                    known = byName;
+                }
+                birth = dob;
+                if (known == null && why.isEmpty()) {
                     Integer idx = newPeopleIndex.get(key);
                     if (idx != null) {
                         newIndex = idx;
                     } else if (!options.createMissing()) {
                         why.add(name + " (born " + dob + ") is not in the file; allow new people to add them");
                     } else {
-                        String sexText = cell(rec, Column.Role.SEX).strip();
                         try {
                             Sex sex = Sex.ofCode(sexText.isEmpty() ? "?" : sexText.substring(0, 1));
+                            if (sexText.length() > 1 && !sexText.equalsIgnoreCase("female")
+                                    && !sexText.equalsIgnoreCase("male")) {
+                                throw new IllegalArgumentException(sexText);
+                            }
                             newPeople.add(Person.draft(CsvSafety.untext(name), sex, dob));
                             if (stream != null) {
                                 stream.person(newPeople.get(newPeople.size() - 1));
@@ -514,6 +543,17 @@ final class ImportReading {
         }
         if (known != null) {
             personId = known.id();
+            birth = known.birthDate();
+            if (!sexText.isEmpty()) {
+                Optional<Sex> sex = sexOf(sexText);
+                if (sex.isEmpty()) {
+                    why.add("sex \"" + sexText + "\" is not F or M (leave it empty to keep " + known.displayName()
+                            + "'s)");
+                } else if (sex.get() != known.sex()) {
+                    why.add("sex " + sex.get().code() + " contradicts the file, where " + known.displayName() + " is "
+                            + known.sex().code() + "; correct the row, or the person (Edit person…)");
+                }
+            }
         }
         LocalDate day = date(cell(rec, Column.Role.DATE), "visit date", why);
         LocalTime time = LocalTime.of(9, 0);
@@ -531,9 +571,11 @@ final class ImportReading {
                 }
             }
         }
-        if (day != null && known != null && day.isBefore(known.birthDate())) {
-            why.add("the visit date " + day + " is before the date of birth");
+        if (day != null) {
+            VisitDate.check(birth, day, today).ifPresent(p -> why.add(lower(p.message())));
         }
+        String context = cell(rec, Column.Role.CONTEXT);
+        TextRules.problem(TextRules.Field.CONTEXT, context).ifPresent(why::add);
         String mName = cell(rec, Column.Role.MEASURER).strip();
         Measurer m = measurersByName.get(foldCached(mName));
         String newM = null;
@@ -542,6 +584,8 @@ final class ImportReading {
         } else if (m == null) {
             if (!options.createMissing()) {
                 why.add("measurer " + mName + " is not in the file; allow new measurers to add them");
+            } else if (TextRules.problem(TextRules.Field.MEASURER_NAME, mName).isPresent()) {
+                why.add(TextRules.problem(TextRules.Field.MEASURER_NAME, mName).get());
             } else {
                 String f = foldCached(mName);
                 newM = newMeasurerByFold.get(f);
@@ -558,7 +602,22 @@ final class ImportReading {
         if (!why.isEmpty()) {
             return null;
         }
-        return new Head(personId, newIndex, m, newM, LocalDateTime.of(day, time), cell(rec, Column.Role.CONTEXT));
+        return new Head(personId, newIndex, m, newM, LocalDateTime.of(day, time), context);
+    }
+
+    /** F/M/female/male in any case; empty for anything else. */
+    private static Optional<Sex> sexOf(String text) {
+        String t = text.strip().toLowerCase(java.util.Locale.ROOT);
+        return switch (t) {
+            case "f", "female" -> Optional.of(Sex.FEMALE);
+            case "m", "male" -> Optional.of(Sex.MALE);
+            default -> Optional.empty();
+        };
+    }
+
+    private static String lower(String sentence) {
+        String s = sentence.endsWith(".") ? sentence.substring(0, sentence.length() - 1) : sentence;
+        return Character.toLowerCase(s.charAt(0)) + s.substring(1);
     }
 
     private void values(CsvRows rec, long line, Pending p) {

@@ -99,5 +99,39 @@ final class RowLog {
         long count(Outcome o) {
             return counts[o.ordinal()];
         }
+
+        /**
+         * The rows not imported, each visit once: a rejected visit's rows share one report naming all its
+         * lines (e.g. "lines 5–14"), so a bad value is told once with its reasons, not once per row.
+         */
+        List<ImportPlan.Finding> findings() {
+            record Entry(List<Long> lines, Outcome outcome, String reason) {
+            }
+            List<Entry> out = new ArrayList<>();
+            java.util.Map<Integer, Entry> entryOfVisit = new java.util.HashMap<>();
+            for (int i = 0; i < refs.length; i++) {
+                int r = refs[i];
+                if (r < 0) {
+                    RowReport own = this.own.get(-r - 1);
+                    Entry last = out.isEmpty() ? null : out.get(out.size() - 1);
+                    if (i > 0 && refs[i - 1] < 0 && last != null && last.outcome() == own.outcome()
+                            && last.reason().equals(own.reason())) {
+                        // following rows of one visit that could not be placed share their reason: told once
+                        last.lines().add(own.line());
+                    } else {
+                        out.add(new Entry(new ArrayList<>(List.of(own.line())), own.outcome(), own.reason()));
+                    }
+                } else if (visitReasons[r] != null) {
+                    Entry e = entryOfVisit.get(r);
+                    if (e == null) {
+                        e = new Entry(new ArrayList<>(), Outcome.REJECTED, visitReasons[r]);
+                        entryOfVisit.put(r, e);
+                        out.add(e);
+                    }
+                    e.lines().add((long) lines[i]);
+                }
+            }
+            return out.stream().map(e -> new ImportPlan.Finding(e.lines(), e.outcome(), e.reason())).toList();
+        }
     }
 }

@@ -48,6 +48,25 @@ public final class Database implements AutoCloseable {
         return open(file, BUSY_TIMEOUT_MS);
     }
 
+    /**
+     * Opens a file that must already exist: what a person names with {@code --db} or at start-up. A
+     * missing file or folder, or a folder given as the file, is refused with the path and nothing is
+     * created (only the default file is seeded, and New file… creates on purpose).
+     */
+    public static Database openExisting(Path file) {
+        Path abs = file.toAbsolutePath();
+        if (Files.isDirectory(abs)) {
+            throw new StoreException(abs + " is a folder, not a Shapetrail file; name the .sqlite file inside it.");
+        }
+        if (!Files.exists(abs)) {
+            Path parent = abs.getParent();
+            throw new StoreException("There is no Shapetrail file at " + abs
+                    + (parent != null && !Files.isDirectory(parent) ? " (the folder " + parent + " does not exist)" : "")
+                    + "; check the path. Nothing was created: to start a new file, use New file… in the app.");
+        }
+        return open(abs, BUSY_TIMEOUT_MS);
+    }
+
     /** Opens with a chosen busy timeout (tests of contention use a short one). */
     public static Database open(Path file, int busyTimeoutMs) {
         Path abs = file.toAbsolutePath();

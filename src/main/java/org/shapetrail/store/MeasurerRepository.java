@@ -20,7 +20,7 @@ public final class MeasurerRepository {
     public Measurer insert(String name, String accreditation) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO measurer (name, accreditation) VALUES (?, ?)",
                 Statement.RETURN_GENERATED_KEYS)) {
-            ps.setString(1, name);
+            ps.setString(1, TextRules.require(TextRules.Field.MEASURER_NAME, name));
             ps.setString(2, accreditation);
             ps.executeUpdate();
             return new Measurer(Sql.generatedId(ps), name, accreditation);

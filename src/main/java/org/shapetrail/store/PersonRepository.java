@@ -47,12 +47,12 @@ public final class PersonRepository {
     }
 
     private static void bind(PreparedStatement ps, Person p) throws SQLException {
-        ps.setString(1, p.displayName());
+        ps.setString(1, TextRules.require(TextRules.Field.PERSON_NAME, p.displayName()));
         ps.setString(2, p.sex().code());
         ps.setString(3, p.birthDate().toString());
         Sql.setNullableDouble(ps, 4, p.fatherStatureCm());
         Sql.setNullableDouble(ps, 5, p.motherStatureCm());
-        ps.setString(6, p.notes());
+        ps.setString(6, TextRules.require(TextRules.Field.NOTES, p.notes()));
         ps.setInt(7, p.consent().measurement() ? 1 : 0);
         ps.setInt(8, p.consent().photographs() ? 1 : 0);
         ps.setInt(9, p.consent().shareWithParent() ? 1 : 0);

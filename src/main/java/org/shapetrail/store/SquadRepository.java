@@ -21,7 +21,7 @@ public final class SquadRepository {
     public Squad insert(String name) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO squad (name) VALUES (?)",
                 Statement.RETURN_GENERATED_KEYS)) {
-            ps.setString(1, name);
+            ps.setString(1, TextRules.require(TextRules.Field.SQUAD_NAME, name));
             ps.executeUpdate();
             return new Squad(Sql.generatedId(ps), name);
         }

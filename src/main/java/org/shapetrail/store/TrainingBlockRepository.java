@@ -20,7 +20,7 @@ public final class TrainingBlockRepository {
     public TrainingBlock insert(TrainingBlock b) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO training_block (name, squad_id, starts_on, ends_on)"
                 + " VALUES (?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
-            ps.setString(1, b.name());
+            ps.setString(1, TextRules.require(TextRules.Field.BLOCK_NAME, b.name()));
             ps.setLong(2, b.squadId());
             ps.setString(3, b.startsOn().toString());
             ps.setString(4, b.endsOn().toString());

@@ -5,16 +5,21 @@ import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
+import java.time.LocalDate;
 import java.time.LocalDateTime;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.shapetrail.measure.Problem;
+import org.shapetrail.measure.ProblemKind;
 import org.shapetrail.measure.Site;
 import org.shapetrail.measure.SiteTrials;
 import org.shapetrail.measure.VisitCheck;
+import org.shapetrail.measure.VisitDate;
 import org.shapetrail.measure.VisitEvaluation;
 import org.shapetrail.somatotype.Rating;
 
@@ -234,10 +239,16 @@ public final class VisitRepository {
          * @throws InvalidVisitException when a visit is refused; StoreException when what was written differs
          */
         public void finish(List<Visit> all) throws SQLException {
+            Map<Long, LocalDate> births = birthDates();
+            LocalDate today = LocalDate.now();
             for (int i = 0; i < all.size(); i++) {
                 Visit v = all.get(i);
+                List<Problem> problems = new ArrayList<>(fieldProblems(v, births.get(v.personId()), today));
                 if (i >= checked.length || !isChecked[i] || checked[i] != fingerprint(v.trials())) {
-                    VisitRepository.check(v);
+                    problems.addAll(VisitCheck.evaluate(v.trials()).problems());
+                }
+                if (!problems.isEmpty()) {
+                    throw new InvalidVisitException(problems);
                 }
             }
             writeVisitRows();
@@ -378,16 +389,43 @@ public final class VisitRepository {
         }
     }
 
-    private static void check(Visit v) {
-        VisitEvaluation ev = VisitCheck.evaluate(v.trials());
-        if (!ev.isValid()) {
-            throw new InvalidVisitException(ev.problems());
+    /**
+     * Problems of a visit's own fields, the rules every path shares: its date against the person's birth
+     * and today ({@link VisitDate}), and its context and notes ({@link TextRules}).
+     *
+     * @param birth the person's date of birth, or null when the person is not in the file
+     */
+    static List<Problem> fieldProblems(Visit v, LocalDate birth, LocalDate today) {
+        List<Problem> out = new ArrayList<>(0);
+        VisitDate.check(birth, v.measuredAt().toLocalDate(), today).ifPresent(out::add);
+        TextRules.problem(TextRules.Field.CONTEXT, v.context()).ifPresent(w -> out.add(textProblem(w)));
+        TextRules.problem(TextRules.Field.NOTES, v.notes()).ifPresent(w -> out.add(textProblem(w)));
+        return out;
+    }
+
+    private static Problem textProblem(String why) {
+        return new Problem(null, ProblemKind.UNUSABLE_TEXT, Character.toUpperCase(why.charAt(0)) + why.substring(1) + ".");
+    }
+
+    /** Every person's date of birth, by id. */
+    private Map<Long, LocalDate> birthDates() throws SQLException {
+        Map<Long, LocalDate> out = new HashMap<>();
+        try (PreparedStatement ps = c.prepareStatement("SELECT id, birth_date FROM person");
+             ResultSet rs = ps.executeQuery()) {
+            while (rs.next()) {
+                out.put(rs.getLong(1), LocalDate.parse(rs.getString(2)));
+            }
         }
+        return out;
     }
 
     /** Replaces an existing visit's fields and trials (checked first; whole or not at all). */
     public void update(Visit v) throws SQLException {
-        check(v);
+        List<Problem> problems = new ArrayList<>(fieldProblems(v, birthDates().get(v.personId()), LocalDate.now()));
+        problems.addAll(VisitCheck.evaluate(v.trials()).problems());
+        if (!problems.isEmpty()) {
+            throw new InvalidVisitException(problems);
+        }
         try (PreparedStatement ps = c.prepareStatement("UPDATE visit SET person_id = ?, measured_at = ?,"
                 + " measurer_id = ?, context = ?, notes = ?, trial_count = ? WHERE id = ?")) {
             ps.setLong(1, v.personId());

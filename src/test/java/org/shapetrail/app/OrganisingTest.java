@@ -23,6 +23,7 @@ class OrganisingTest {
     @Test
     void aNewFileGetsItsMeasurerAndSquadsAndNamesAreNotRepeated() {
         Path file = dir.resolve("new.sqlite");
+        Database.open(file).close(); // New file… creates it
         assertEquals(Optional.empty(), Organising.addMeasurer(file, " Ida Marram ", "ISAK level 2"));
         assertEquals(Optional.of("There is already a measurer called ida marram in this file."),
                 Organising.addMeasurer(file, "ida marram", ""));
@@ -39,6 +40,7 @@ class OrganisingTest {
     @Test
     void movingToAnotherSquadEndsTheOpenMembershipTheDayBefore() {
         Path file = dir.resolve("move.sqlite");
+        Database.open(file).close();
         Organising.addSquad(file, "Under-14");
         Organising.addSquad(file, "Under-15");
         long person;

@@ -133,4 +133,32 @@ class VisitEntryViewModelTest {
         assertTrue(vm.raterComparisonProperty().get().startsWith("Rater's 2.5-4.5-2.5 lies at SAD "),
                 vm.raterComparisonProperty().get());
     }
+
+    @Test
+    void aVisitInTheFutureOrBeforeBirthIsRefusedWithTheDateAndNothingIsWritten() throws Exception {
+        String before;
+        try (Database db = Database.open(file)) {
+            before = ContentDigest.of(db);
+        }
+        VisitEntryViewModel vm = form(Locale.UK);
+        fillFull(vm);
+        LocalDate tomorrow = LocalDate.now().plusDays(1);
+        vm.dateProperty().set(tomorrow);
+        assertFalse(vm.canSaveProperty().get());
+        assertTrue(vm.problems().contains("The visit date " + tomorrow + " is in the future (today is " + LocalDate.now()
+                + "); enter the day of the measurements."), vm.problems().toString());
+        assertTrue(vm.save().isEmpty());
+        vm.dateProperty().set(LocalDate.of(2001, 1, 1));
+        assertTrue(vm.problems().contains("The visit date 2001-01-01 is before the date of birth "
+                + history.person().birthDate() + "; check both dates."), vm.problems().toString());
+        assertTrue(vm.save().isEmpty());
+        vm.dateProperty().set(LocalDate.of(2026, 6, 1));
+        vm.contextProperty().set("pre\u0000season");
+        assertTrue(vm.save().isEmpty());
+        assertTrue(vm.problems().contains("The context holds a control character (U+0000) at character 4: remove it."),
+                vm.problems().toString());
+        try (Database db = Database.open(file)) {
+            assertEquals(before, ContentDigest.of(db));
+        }
+    }
 }

@@ -72,9 +72,13 @@ class WorkbenchViewModelTest {
     }
 
     @Test
-    void aMissingFileIsReportedNotThrown() {
-        vm.open(dir.resolve("no-such-folder").resolve("..").resolve("x").resolve("y.txt"));
-        // a new, empty file is created: opening never fails silently, and the list is empty
-        assertEquals(0, vm.rows().size());
+    void aMissingFileIsReportedByItsPathAndNothingIsCreated() {
+        java.nio.file.Path missing = dir.resolve("no-such-folder").resolve("y.sqlite");
+        vm.open(missing);
+        assertEquals("There is no Shapetrail file at " + missing.toAbsolutePath() + " (the folder "
+                + missing.toAbsolutePath().getParent() + " does not exist); check the path. Nothing was created: to"
+                + " start a new file, use New file… in the app.", vm.errorProperty().get());
+        assertEquals(60, vm.rows().size(), "the open file stays open");
+        assertTrue(!java.nio.file.Files.exists(missing.getParent()));
     }
 }

@@ -113,7 +113,7 @@ class OnePassImportTest {
                         + ",09:00,Ada Quarrington,";
                 w.write(head + "stature,1,150.0\n" + head + "stature,2,150.1\n" + head + "triceps,1,9.0\n");
             }
-            w.write("Athlete 1,2010-01-01,M,2099-01-01,09:00,Ada Quarrington,stature,1,tall\n");
+            w.write("Athlete 1,2010-01-01,M,2019-01-01,09:00,Ada Quarrington,stature,1,tall\n");
         }
         Path db = dir.resolve("big.sqlite");
         String before;
@@ -155,6 +155,7 @@ class OnePassImportTest {
                 + "Ada Pelling,2010-03-04,F,2024-01-10,Ada Quarrington,150.0,150.2\n"
                 + "Bea Pelling,2011-05-06,F,2024-01-10,Ada Quarrington,140.0,140.1\n");
         Path db = dir.resolve("cli.sqlite");
+        Database.open(db).close(); // --db names an existing file
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
         int code = ShapetrailCli.execute(new String[] {"import", "--db", db.toString(), "--commit", "--create-missing",
