@@ -10,19 +10,27 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-/** {@code erase-person ID}: erases a person and everything that refers to them (right to erasure). */
+/**
+ * {@code erase-person ID}: erases a person and everything that refers to them (right to erasure), leaves
+ * no trace of them in the file, its WAL or journal, and names the copies made earlier that still hold them.
+ */
 @Command(name = "erase-person", mixinStandardHelpOptions = true,
-        description = "Erase a person with all their visits, trials, ratings and memberships. Cannot be undone;"
-                + " take a backup first if you may need the data.")
+        description = "Erase a person with all their visits, trials, ratings and memberships, and wipe the file's"
+                + " free space so nothing of them can be read from its bytes. Cannot be undone. Backups made"
+                + " earlier are not reached: the command lists those it knows of.")
 final class ErasePersonCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
 
-    @Parameters(index = "0", paramLabel = "ID", description = "The person's id (see the people command).")
-    long personId;
+    @Parameters(index = "0", arity = "0..1", paramLabel = "ID", description = "The person's id (see the people command).")
+    Long personId;
 
     @Option(names = "--yes", description = "Do not ask for confirmation.")
     boolean yes;
+
+    @Option(names = "--wipe-only", description = "Only wipe the free space (after an erasure that another program"
+            + " held up).")
+    boolean wipeOnly;
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -31,6 +39,14 @@ final class ErasePersonCommand implements Callable<Integer> {
     public Integer call() {
         var out = spec.commandLine().getOut();
         try (Database d = db.open()) {
+            if (wipeOnly) {
+                d.wipeFreedSpace();
+                out.println("Wiped the free space of " + d.file() + ".");
+                return 0;
+            }
+            if (personId == null) {
+                throw new StoreException("Name the person's id (see the people command), or use --wipe-only.");
+            }
             Person p = d.inTransaction(tx -> tx.people().find(personId))
                     .orElseThrow(() -> new StoreException("There is no person with id " + personId + "."));
             int visits = d.inTransaction(tx -> tx.visits().ofPerson(personId).size());
@@ -39,8 +55,18 @@ final class ErasePersonCommand implements Callable<Integer> {
                 out.println("Nothing was erased.");
                 return 1;
             }
-            d.inTransaction(tx -> tx.people().erase(personId));
-            out.println("Erased " + p.displayName() + " and " + visits + " visit(s).");
+            Database.Erasure e = d.erasePerson(personId);
+            out.println("Erased " + p.displayName() + " and " + e.visits() + " visit(s); no trace of them is left in "
+                    + d.file() + " or its journal.");
+            var held = e.copies().stream().filter(Database.KnownCopy::stillThere).toList();
+            if (held.isEmpty()) {
+                out.println("Shapetrail knows of no earlier copy of this file that still exists.");
+            } else {
+                out.println("Copies made earlier still hold " + p.displayName() + "'s data; erasure does not reach"
+                        + " them. Delete or destroy them if the data must go everywhere:");
+                held.forEach(c -> out.println("  " + c.path() + " (" + c.kind() + ", " + c.madeAt() + ")"));
+            }
+            out.println("Copies made outside Shapetrail (other backups, exports, letters sent) are not known to it.");
         }
         return 0;
     }

@@ -105,6 +105,13 @@ public final class Database implements AutoCloseable {
                     }
                 }
                 Migrations.migrate(c, version, Migrations.latest());
+                if (backup != null) {
+                    recordBackup(c, backup, "before migration");
+                }
+            }
+            try (Statement s = c.createStatement()) {
+                // deleted rows are overwritten, not left readable in free space (erasure, docs/guide.md)
+                s.execute("PRAGMA secure_delete = ON");
             }
             return new Database(abs, c, backup);
         } catch (SQLException e) {
@@ -193,13 +200,15 @@ public final class Database implements AutoCloseable {
 
     /**
      * Writes a consistent copy of the whole file to {@code target} while the database stays open (SQLite
-     * online backup). An existing target is replaced.
+     * online backup), and records it (an erasure lists the copies that still hold the data). An existing
+     * target is replaced.
      */
     public void backupTo(Path target) {
         lock.lock();
         try (Statement s = connection.createStatement()) {
             Files.deleteIfExists(target);
             s.executeUpdate("backup to '" + target.toAbsolutePath().toString().replace("'", "''") + "'");
+            recordBackup(connection, target.toAbsolutePath(), "backup");
         } catch (SQLException e) {
             throw translate(file.toString(), e);
         } catch (IOException e) {
@@ -250,6 +259,89 @@ public final class Database implements AutoCloseable {
             return new Database(source.toAbsolutePath(), c, null);
         } catch (SQLException e) {
             throw translate(source.toString(), e);
+        }
+    }
+
+    private static void recordBackup(Connection c, Path copy, String kind) throws SQLException {
+        try (java.sql.PreparedStatement ps = c.prepareStatement("INSERT INTO backup_record (path, made_at, kind)"
+                + " VALUES (?, ?, ?)")) {
+            ps.setString(1, copy.toString());
+            ps.setString(2, LocalDateTime.now().withNano(0).toString());
+            ps.setString(3, kind);
+            ps.executeUpdate();
+        }
+    }
+
+    /** A copy of this file that Shapetrail made (a backup, or the copy kept before a migration). */
+    public record KnownCopy(Path path, LocalDateTime madeAt, String kind, boolean stillThere) {
+    }
+
+    /** The copies of this file Shapetrail made and recorded, oldest first, with whether each is still there. */
+    public java.util.List<KnownCopy> knownCopies() {
+        return inTransaction(tx -> {
+            java.util.List<KnownCopy> out = new java.util.ArrayList<>();
+            try (Statement s = tx.connection().createStatement();
+                 var rs = s.executeQuery("SELECT path, made_at, kind FROM backup_record ORDER BY made_at, id")) {
+                while (rs.next()) {
+                    Path p = Path.of(rs.getString(1));
+                    out.add(new KnownCopy(p, LocalDateTime.parse(rs.getString(2)), rs.getString(3), Files.exists(p)));
+                }
+            }
+            return out;
+        });
+    }
+
+    /** What an erasure did. */
+    public record Erasure(Person person, int visits, java.util.List<KnownCopy> copies) {
+    }
+
+    /**
+     * Erases a person with everything that hangs on them (visits, trials, ratings, memberships), then wipes
+     * the traces: secure deletion overwrote the rows, VACUUM rebuilds the file without the freed pages,
+     * and a truncating checkpoint empties the write-ahead log, so the person's data is nowhere in the file,
+     * its WAL or journal. Copies made before (backups) are not reached; they are returned to be named.
+     *
+     * @throws StoreException when there is no such person, or when another program holds the file open so
+     *     the traces cannot be wiped yet (the rows are erased; {@link #wipeFreedSpace} finishes the work)
+     */
+    public Erasure erasePerson(long personId) {
+        Erasure e = inTransaction(tx -> {
+            Person p = tx.people().find(personId)
+                    .orElseThrow(() -> new StoreException("There is no person with id " + personId + "."));
+            int visits = tx.visits().ofPerson(personId).size();
+            tx.people().erase(personId);
+            return new Erasure(p, visits, java.util.List.of());
+        });
+        try {
+            wipeFreedSpace();
+        } catch (StoreException busy) {
+            throw new StoreException(e.person().displayName() + " is erased, but another program has " + file
+                    + " open, so its freed space may still hold traces. Close the other program (or Shapetrail"
+                    + " window), then run: erase-person --wipe-only", busy);
+        }
+        return new Erasure(e.person(), e.visits(), knownCopies());
+    }
+
+    /**
+     * Rebuilds the file without free pages (VACUUM) and empties the write-ahead log, so nothing deleted
+     * can be read from the file's bytes.
+     *
+     * @throws StoreException when another program reads the file meanwhile (close it, then run again)
+     */
+    public void wipeFreedSpace() {
+        lock.lock();
+        try (Statement s = connection.createStatement()) {
+            s.execute("VACUUM");
+            try (var rs = s.executeQuery("PRAGMA wal_checkpoint(TRUNCATE)")) {
+                if (rs.next() && (rs.getInt(1) != 0 || rs.getInt(2) != 0 && rs.getInt(2) != rs.getInt(3))) {
+                    throw new StoreException("Another program has " + file + " open, so its write-ahead log could"
+                            + " not be emptied; close it and run again.");
+                }
+            }
+        } catch (SQLException e) {
+            throw translate(file.toString(), e);
+        } finally {
+            lock.unlock();
         }
     }
 
