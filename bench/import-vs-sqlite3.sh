@@ -13,11 +13,13 @@ cp=$(mvn -q dependency:build-classpath -Dmdep.outputFile=/dev/stdout):target/cla
 java -cp "$cp" org.shapetrail.bench.ImportBenchmark --write "$work/trials.csv"
 echo "CSV: $(wc -l < "$work/trials.csv") lines, $(du -h "$work/trials.csv" | cut -f1)"
 # a first dry run records the commands' class-data archive (bin/shapetrail)
+: > "$work/warm.sqlite" # an empty file is an empty Shapetrail file; --db must name an existing one
 bin/shapetrail import --db "$work/warm.sqlite" --create-missing --show none "$work/trials.csv" > /dev/null
 now() { date +%s.%N; }
 ratios=()
 for run in 1 2 3 4 5; do
   rm -f "$work/plain.db" "$work/cli.sqlite"*
+  : > "$work/cli.sqlite"
   s0=$(now)
   sqlite3 "$work/plain.db" ".mode csv" ".import $work/trials.csv trials"
   s1=$(now)

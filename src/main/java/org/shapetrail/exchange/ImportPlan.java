@@ -59,7 +59,10 @@ public final class ImportPlan {
 
         /** E.g. "lines 5–14: rejected — Triceps trial 2 …". */
         public String describe() {
-            return where() + ": " + outcome.words() + (reason.isEmpty() ? "" : " — " + reason);
+            // a one-line finding need not repeat its line inside the reason
+            String why = lines.size() == 1 && reason.startsWith("line " + lines.get(0) + ": ")
+                    ? reason.substring(("line " + lines.get(0) + ": ").length()) : reason;
+            return where() + ": " + outcome.words() + (why.isEmpty() ? "" : " — " + why);
         }
     }
 

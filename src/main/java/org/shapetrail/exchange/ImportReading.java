@@ -404,7 +404,9 @@ final class ImportReading {
                 }
             }
             if (p.problems != null) {
-                reasons[p.index] = String.join(" ", p.problems);
+                // each reason a sentence of its own, so several read apart
+                reasons[p.index] = String.join(" ", p.problems.stream().map(w -> w.endsWith(".") ? w : w + ".")
+                        .toList());
             }
         }
         if (log.size() == 0) {
@@ -707,7 +709,7 @@ final class ImportReading {
         int at = slot * SiteTrials.MAX_TRIALS + trial - 1;
         if (!Double.isNaN(p.values[at])) {
             p.problem((longLayout ? "line " + line + ": " : "") + site.label() + " trial " + trial
-                    + " appears twice for this visit");
+                    + " appears twice for this visit (same person, date, time and measurer); remove the repeated row");
             return;
         }
         p.values[at] = value;

@@ -32,9 +32,16 @@ public final class ValueParser {
                     site.label() + " \"" + t + "\" uses '" + other + "' as the decimal separator; enter "
                             + fixed + " " + unit + "."));
         }
+        String shown = t.length() > 24 ? t.substring(0, 20) + "… (" + t.length() + " characters)" : t;
         if (!isNumberWith(t, style.separator())) {
-            return new Parsed(Double.NaN, new Problem(site, ProblemKind.NOT_A_NUMBER,
-                    site.label() + " \"" + t + "\" is not a number; enter the value in " + unit + "."));
+            boolean exponent = t.length() < 40 && t.matches("[+-]?[0-9]+([.,][0-9]*)?[eE][+-]?[0-9]+");
+            return new Parsed(Double.NaN, new Problem(site, ProblemKind.NOT_A_NUMBER, site.label() + " \"" + shown
+                    + (exponent ? "\" is written with an exponent; enter a plain decimal in " + unit + "."
+                    : "\" is not a number; enter the value in " + unit + ".")));
+        }
+        if (t.replaceAll("[^0-9]", "").length() > 15) {
+            return new Parsed(Double.NaN, new Problem(site, ProblemKind.OUT_OF_RANGE, site.label() + " \"" + shown
+                    + "\" has more digits than any measurement; enter the value in " + unit + "."));
         }
         double v = Double.parseDouble(t.replace(style.separator(), '.'));
         return new Parsed(v, null);

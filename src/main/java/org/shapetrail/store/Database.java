@@ -78,7 +78,9 @@ public final class Database implements AutoCloseable {
             throw new StoreException("Cannot create the folder for " + abs + ": " + e.getMessage(), e);
         }
         boolean existed = Files.exists(abs) && sizeOf(abs) > 0;
+        boolean readOnly = existed && !writable(abs);
         SQLiteConfig config = new SQLiteConfig();
+        config.setReadOnly(readOnly);
         config.enforceForeignKeys(true);
         config.setJournalMode(SQLiteConfig.JournalMode.WAL);
         config.setBusyTimeout(busyTimeoutMs);
@@ -96,6 +98,11 @@ public final class Database implements AutoCloseable {
                         + "); this version reads up to schema " + Migrations.latest() + ". Update Shapetrail.");
             }
             Path backup = null;
+            if (version < Migrations.latest() && readOnly) {
+                throw new StoreException("The file " + abs + " is read-only and was written by an older Shapetrail"
+                        + " (schema " + version + "); make it writable so it can be upgraded (a copy is kept beside it"
+                        + " first), or open a writable copy. Nothing was changed.");
+            }
             if (version < Migrations.latest()) {
                 if (existed) {
                     backup = abs.resolveSibling(abs.getFileName() + ".before-schema-" + Migrations.latest() + "-"
@@ -120,6 +127,30 @@ public final class Database implements AutoCloseable {
         } catch (RuntimeException e) {
             closeQuietly(c);
             throw e;
+        }
+    }
+
+    /**
+     * Whether the file may be written: by the operating system's answer and, on POSIX systems, by its
+     * owner's write permission too, so a file made read-only is treated so even for the superuser.
+     */
+    private static boolean writable(Path p) {
+        if (!Files.isWritable(p)) {
+            return false;
+        }
+        try {
+            return Files.getPosixFilePermissions(p).contains(java.nio.file.attribute.PosixFilePermission.OWNER_WRITE);
+        } catch (UnsupportedOperationException | IOException e) {
+            return true;
+        }
+    }
+
+    /** True when the file was opened for reading only (its permissions forbid writing). */
+    public boolean readOnly() {
+        try {
+            return connection.isReadOnly();
+        } catch (SQLException e) {
+            return false;
         }
     }
 
@@ -226,8 +257,17 @@ public final class Database implements AutoCloseable {
         if (!Files.isRegularFile(source)) {
             throw new StoreException("The backup " + source + " does not exist.");
         }
+        String integrity;
         try (Database check = Database.openReadOnlyCheck(source)) {
             check.schemaVersion();
+            integrity = check.integrityCheck();
+        } catch (StoreException refused) {
+            throw new StoreException("The backup cannot be used — " + refused.getMessage().replaceAll(" Nothing was changed.*$", "") + " Nothing was"
+                    + " restored: " + file + " is as it was. Choose another backup.", refused);
+        }
+        if (!integrity.equals("ok")) {
+            throw new StoreException("The backup " + source + " is damaged (" + integrity.lines().findFirst().orElse("")
+                    + "). Nothing was restored: " + file + " is as it was. Choose another backup.");
         }
         lock.lock();
         try (Statement s = connection.createStatement()) {
@@ -383,7 +423,17 @@ public final class Database implements AutoCloseable {
                         + " (or remove one that others still refer to); nothing was changed.", e);
             }
             if (code == SQLiteErrorCode.SQLITE_NOTADB) {
-                return new StoreException("The file " + file + " is not a Shapetrail database.", e);
+                return new StoreException("The file " + file + " is not a Shapetrail database (nor any SQLite file);"
+                        + " check that you chose the right file. Nothing was changed.", e);
+            }
+            if (code.name().startsWith("SQLITE_CORRUPT")) {
+                return new StoreException("The file " + file + " is damaged: SQLite finds it malformed (cut short or"
+                        + " overwritten). Nothing was changed; restore it from a backup (the restore command) or use"
+                        + " a copy made before.", e);
+            }
+            if (code.name().startsWith("SQLITE_READONLY")) {
+                return new StoreException("The file " + file + " is read-only, so nothing was saved; make it writable"
+                        + " (its file permissions) or work on a copy.", e);
             }
         }
         return new StoreException("The database file " + file + " could not be used: " + e.getMessage(), e);
