@@ -589,10 +589,26 @@ public final class Workbench {
         List<PersonHistory> people = academy.membersOn(squad.id(), settings.get().to()).stream()
                 .map(id -> l.histories().get(id)).toList();
         var composer = new org.shapetrail.letters.LetterComposer(l.builder(), settings.get(), locale);
+        List<Path> targets = new java.util.ArrayList<>(people.stream().map(h -> folder.toPath().resolve(
+                org.shapetrail.letters.LetterBatch.fileName(h.person().id(), h.person().displayName()))).toList());
+        targets.add(folder.toPath().resolve(org.shapetrail.letters.LetterBatch.COMBINED));
+        List<Path> there = org.shapetrail.OutputFiles.existing(targets);
+        if (!there.isEmpty()) {
+            Alert ask = new Alert(Alert.AlertType.CONFIRMATION, there.size() + " of these letters are in " + folder
+                    + " already (e.g. " + there.get(0).getFileName() + "). Replace them?", ButtonType.CANCEL,
+                    ButtonType.OK);
+            ask.setHeaderText("Replace existing letters");
+            ask.initOwner(root.getScene().getWindow());
+            if (ask.showAndWait().orElse(ButtonType.CANCEL) != ButtonType.OK) {
+                return;
+            }
+        }
         vm.runner().run("Writing letters", progress -> org.shapetrail.letters.LetterBatch.write(composer, people,
-                folder.toPath(), (done, total) -> progress.update(done, total, "Letter " + done + " of " + total),
-                progress::isCancelled), files -> vm.statusProperty().set("Wrote " + Math.max(0, files.size() - 1)
-                + " letter(s) to " + folder), t -> vm.errorProperty().set(Errors.describe(t)));
+                folder.toPath(), true, "confirm", (done, total) -> progress.update(done, total, "Letter " + done + " of "
+                        + total), progress::isCancelled), result -> {
+                    vm.statusProperty().set("Wrote " + result.letters().size() + " letter(s) to " + folder);
+                    vm.errorProperty().set(String.join(" ", result.refused()));
+                }, t -> vm.errorProperty().set(Errors.describe(t)));
     }
 
     private void personForm(org.shapetrail.store.Person editing) {

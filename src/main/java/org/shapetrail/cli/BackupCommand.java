@@ -16,14 +16,18 @@ final class BackupCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
 
-    @Parameters(index = "0", paramLabel = "TARGET", description = "File to write the backup to (replaced if present).")
+    @Parameters(index = "0", paramLabel = "TARGET", description = "File to write the backup to.")
     Path target;
+
+    @picocli.CommandLine.Mixin
+    OverwriteOption overwrite;
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() {
+        org.shapetrail.OutputFiles.refuseExisting(java.util.List.of(target), overwrite.overwrite, OverwriteOption.HOW);
         try (Database d = db.open()) {
             d.backupTo(target);
             String digest = ContentDigest.of(d);

@@ -2,10 +2,10 @@ package org.shapetrail.cli;
 
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.concurrent.Callable;
+import org.shapetrail.OutputFiles;
 import org.shapetrail.exchange.Exporter;
 import org.shapetrail.history.Academy;
 import org.shapetrail.history.AnalysisSettings;
@@ -33,21 +33,29 @@ final class ExportCommand implements Callable<Integer> {
     @Option(names = "--out", required = true, paramLabel = "FILE")
     Path out;
 
+    @picocli.CommandLine.Mixin
+    OverwriteOption overwrite;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() throws Exception {
-        int rows;
-        try (Database d = db.open(); Writer w = Files.newBufferedWriter(out, StandardCharsets.UTF_8)) {
+        int[] rows = new int[1];
+        OutputFiles.refuseExisting(java.util.List.of(out), overwrite.overwrite, OverwriteOption.HOW);
+        try (Database d = db.open()) {
             Academy a = Academy.load(d);
-            rows = switch (what) {
-                case trials -> Exporter.trials(a, w);
-                case visits -> Exporter.visits(HistoryBuilder.of(a, AnalysisSettings.standard()), w);
-                case squads -> Exporter.squads(HistoryBuilder.of(a, AnalysisSettings.standard()), LocalDate.now(), w);
-            };
+            OutputFiles.writeWhole(out, stream -> {
+                Writer w = new java.io.BufferedWriter(new java.io.OutputStreamWriter(stream, StandardCharsets.UTF_8));
+                rows[0] = switch (what) {
+                    case trials -> Exporter.trials(a, w);
+                    case visits -> Exporter.visits(HistoryBuilder.of(a, AnalysisSettings.standard()), w);
+                    case squads -> Exporter.squads(HistoryBuilder.of(a, AnalysisSettings.standard()), LocalDate.now(), w);
+                };
+                w.flush();
+            });
         }
-        spec.commandLine().getOut().println("Wrote " + rows + " row(s) to " + out + ".");
+        spec.commandLine().getOut().println("Wrote " + rows[0] + " row(s) to " + out + ".");
         return 0;
     }
 }

@@ -2,7 +2,6 @@ package org.shapetrail.cli;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.shapetrail.store.Database;
@@ -26,6 +25,9 @@ final class ExportPersonCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "FILE", description = "Write to FILE instead of standard output.")
     Path out;
 
+    @picocli.CommandLine.Mixin
+    OverwriteOption overwrite;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -36,7 +38,9 @@ final class ExportPersonCommand implements Callable<Integer> {
             if (out == null) {
                 spec.commandLine().getOut().print(json);
             } else {
-                Files.writeString(out, json, StandardCharsets.UTF_8);
+                org.shapetrail.OutputFiles.refuseExisting(java.util.List.of(out), overwrite.overwrite,
+                        OverwriteOption.HOW);
+                org.shapetrail.OutputFiles.writeWhole(out, s -> s.write(json.getBytes(StandardCharsets.UTF_8)));
                 spec.commandLine().getOut().println("Wrote the record of person " + personId + " to " + out + ".");
             }
         }

@@ -55,6 +55,9 @@ final class LettersCommand implements Callable<Integer> {
     @Option(names = "--skinfolds-for-under-16", description = "also describe skinfold thickness for juniors under 16")
     boolean skinfolds;
 
+    @picocli.CommandLine.Mixin
+    OverwriteOption overwrite;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -70,12 +73,14 @@ final class LettersCommand implements Callable<Integer> {
         }
         LetterComposer c = new LetterComposer(b, new LetterSettings(academy, sender, role, contact, from, to, skinfolds),
                 Locale.UK);
-        var files = LetterBatch.write(c, people, out, (done, total) -> {
+        var result = LetterBatch.write(c, people, out, overwrite.overwrite, OverwriteOption.HOW, (done, total) -> {
             o.printf("\rLetters: %d of %d", done, total);
             o.flush();
         }, () -> false);
         o.println();
-        o.println("Wrote " + (files.size() - 1) + " letter(s) and " + files.get(files.size() - 1) + ".");
-        return 0;
+        o.println("Wrote " + result.letters().size() + " letter(s)" + (result.combined() == null ? "."
+                : " and " + result.combined() + "."));
+        result.refused().forEach(why -> spec.commandLine().getErr().println(why));
+        return result.refused().isEmpty() ? 0 : 1;
     }
 }

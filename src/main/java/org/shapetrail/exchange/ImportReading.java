@@ -530,7 +530,7 @@ final class ImportReading {
                                     && !sexText.equalsIgnoreCase("male")) {
                                 throw new IllegalArgumentException(sexText);
                             }
-                            newPeople.add(Person.draft(CsvSafety.untext(name), sex, dob));
+                            newPeople.add(Person.draft(name, sex, dob));
                             if (stream != null) {
                                 stream.person(newPeople.get(newPeople.size() - 1));
                             }

@@ -54,7 +54,51 @@ public final class LetterPdf {
     /** Adds the letter's pages to {@code doc}. */
     public static void append(PDDocument doc, Letter letter) throws IOException {
         LetterPdf l = new LetterPdf(doc);
+        l.requireCovered(letter);
         l.layout(letter);
+    }
+
+    /**
+     * Refuses, before anything is drawn, a letter with characters the embedded fonts lack (Liberation Sans
+     * covers Latin, Greek and Cyrillic) or in a right-to-left script (not laid out here): a name would
+     * otherwise print as empty boxes, or backwards, without a word.
+     */
+    private void requireCovered(Letter letter) {
+        java.util.Set<Integer> missing = new java.util.TreeSet<>();
+        boolean rtl = false;
+        String all = letter.allText();
+        for (int i = 0; i < all.length(); ) {
+            int cp = all.codePointAt(i);
+            i += Character.charCount(cp);
+            if (cp == '\n' || cp == '\t') {
+                continue;
+            }
+            byte dir = Character.getDirectionality(cp);
+            if (dir == Character.DIRECTIONALITY_RIGHT_TO_LEFT || dir == Character.DIRECTIONALITY_RIGHT_TO_LEFT_ARABIC) {
+                rtl = true;
+                missing.add(cp);
+            } else if (!covers(regular, cp) || !covers(bold, cp)) {
+                missing.add(cp);
+            }
+        }
+        if (!missing.isEmpty()) {
+            StringBuilder chars = new StringBuilder();
+            missing.stream().limit(8).forEach(cp -> chars.append(new String(Character.toChars(cp))).append(' ')
+                    .append(String.format(java.util.Locale.ROOT, "(U+%04X) ", cp)));
+            throw new UnwritableLetterException("The letter for " + letter.recipientName() + " was not written: "
+                    + (rtl ? "right-to-left text is not laid out in letters, and " : "") + "the letter font (Liberation"
+                    + " Sans: Latin, Greek and Cyrillic) has no " + chars.toString().strip() + ". Write the name in"
+                    + " one of those scripts (Edit person…) to send this letter; the other letters are written.");
+        }
+    }
+
+    private static boolean covers(PDFont f, int cp) {
+        try {
+            f.encode(new String(Character.toChars(cp)));
+            return true;
+        } catch (IllegalArgumentException | IOException e) {
+            return false;
+        }
     }
 
     /** Writes one letter as a PDF. */

@@ -38,6 +38,6 @@ public final class LettersBenchmark {
                 Locale.UK);
         int[] run = {0};
         Harness.time("40 letters", 1, 5, () -> LetterBatch.write(c, forty, dir.resolve("run" + run[0]++),
-                (d, t) -> { }, () -> false));
+                false, "", (d, t) -> { }, () -> false));
     }
 }

@@ -192,8 +192,10 @@ class LettersTest {
         Path out = Files.createTempDirectory("batch");
         List<PersonHistory> people = List.of(history("Zeb Thistlewood"), history("Zoë Greyling"));
         int[] last = {0};
-        var files = LetterBatch.write(new LetterComposer(builder, YEAR, Locale.UK), people, out,
+        var result = LetterBatch.write(new LetterComposer(builder, YEAR, Locale.UK), people, out, false, "",
                 (done, total) -> last[0] = done, () -> false);
+        List<Path> files = new ArrayList<>(result.letters());
+        files.add(result.combined());
         assertEquals(3, files.size());
         assertEquals(2, last[0]);
         assertTrue(files.get(0).getFileName().toString().endsWith("-zeb-thistlewood.pdf"));
