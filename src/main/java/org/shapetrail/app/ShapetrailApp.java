@@ -88,7 +88,7 @@ public final class ShapetrailApp extends Application {
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.F, KeyCombination.SHORTCUT_DOWN),
                 () -> scene.lookup("#search").requestFocus());
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.N, KeyCombination.SHORTCUT_DOWN),
-                () -> workbench.enterVisit(null));
+                workbench::enterVisit);
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.DIGIT1, KeyCombination.SHORTCUT_DOWN),
                 () -> workbench.pages().getSelectionModel().select(0));
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.DIGIT2, KeyCombination.SHORTCUT_DOWN),

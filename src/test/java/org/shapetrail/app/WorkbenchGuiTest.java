@@ -346,7 +346,7 @@ class WorkbenchGuiTest {
         select(robot, "Zeb Thistlewood");
         robot.clickOn("#preview-letter");
         WaitForAsyncUtils.waitForFxEvents();
-        javafx.stage.Stage preview = workbench.lastPreview;
+        javafx.stage.Stage preview = workbench.lastPreview();
         assertTrue(preview != null && preview.isShowing(), "preview window open");
         var box = (javafx.scene.layout.VBox) preview.getScene().lookup("#letter-preview");
         assertTrue(box.getChildren().size() >= 1 && box.getChildren().size() <= 2, "one or two pages");

@@ -1,0 +1,225 @@
+package org.shapetrail.app;
+
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayDeque;
+import java.util.Deque;
+import java.util.Optional;
+import javafx.beans.binding.Bindings;
+import javafx.collections.FXCollections;
+import javafx.scene.control.Alert;
+import javafx.scene.control.ButtonType;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.DatePicker;
+import javafx.scene.control.Dialog;
+import javafx.scene.control.Label;
+import javafx.scene.layout.GridPane;
+import javafx.util.StringConverter;
+import org.shapetrail.history.PersonHistory;
+import org.shapetrail.letters.LetterComposer;
+import org.shapetrail.letters.LetterPreview;
+import org.shapetrail.letters.LetterSettings;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.Person;
+import org.shapetrail.store.Squad;
+import org.shapetrail.store.Visit;
+
+/**
+ * The person page and what it does: shows the selected person, enters, edits and deletes their visits
+ * (with undo until the app closes), moves them to another squad, edits them and previews their letter.
+ */
+final class PersonPageView {
+    /** The choice in "Move to squad" for someone who leaves: their memberships end on the chosen day. */
+    private static final Squad LEAVES = new Squad(-1, "No squad (leaves)");
+
+    private final WorkbenchContext ctx;
+    private final PersonPane pane = new PersonPane();
+    /** Earlier versions of visits changed in this session, newest first, for undo. */
+    private final Deque<Runnable> undo = new ArrayDeque<>();
+    javafx.stage.Stage lastPreview;
+
+    PersonPageView(WorkbenchContext ctx) {
+        this.ctx = ctx;
+        pane.onNewVisit(() -> enterVisit(null));
+        pane.onEditVisit(this::editVisit);
+        pane.onDeleteVisit(this::deleteVisit);
+        pane.undo.setOnAction(e -> undoLast());
+        pane.undo.setDisable(true);
+        pane.editPerson.setOnAction(e -> ctx.vm.selectedHistory().ifPresent(h -> ctx.personForm(h.person())));
+        pane.moveSquad.setOnAction(e -> ctx.vm.selectedHistory().ifPresent(h -> moveToSquad(h.person())));
+        pane.previewLetter.setOnAction(e -> previewLetter(new LetterSettings("Saltmarsh Bay Sports Academy",
+                "the academy physiotherapist", "", "via the academy office", LocalDate.now().minusYears(1),
+                LocalDate.now(), false)));
+    }
+
+    PersonPane pane() {
+        return pane;
+    }
+
+    /** Shows the selected person (nothing when none is selected). */
+    void refresh() {
+        Optional<PersonHistory> h = ctx.vm.selectedHistory();
+        Loaded l = ctx.loaded();
+        if (h.isEmpty() || l == null) {
+            return;
+        }
+        pane.show(h.get(), WorkbenchViewModel.currentSquad(l.builder().academy(), h.get().person().id()), ctx.locale);
+    }
+
+    /** The entry window for a new visit (or an edit) of the selected person. */
+    VisitEntryView entryFor(Visit editing) {
+        PersonHistory h = ctx.vm.selectedHistory().orElseThrow();
+        Loaded l = ctx.loaded();
+        return new VisitEntryView(new VisitEntryViewModel(l.file(), l.builder(), h, ctx.locale, editing), ctx.window());
+    }
+
+    void enterVisit(Visit editing) {
+        if (ctx.vm.selectedHistory().isEmpty()) {
+            return;
+        }
+        entryFor(editing).showAndWait().ifPresent(v -> ctx.vm.reload());
+    }
+
+    private Optional<Visit> stored(VisitLine line) {
+        return ctx.loaded().builder().academy().visits().stream().filter(v -> v.id() == line.visitId()).findFirst();
+    }
+
+    private void editVisit(VisitLine line) {
+        stored(line).ifPresent(shown -> {
+            Path file = ctx.loaded().file();
+            Optional<VisitSnapshot> before;
+            try {
+                before = OffFxThread.call(ctx.storing, () -> VisitSnapshot.read(file, shown.id()));
+            } catch (RuntimeException e) {
+                ctx.vm.errorProperty().set("The visit cannot be edited now: " + Errors.describe(e));
+                return;
+            }
+            Optional<Visit> after = entryFor(shown).showAndWait();
+            if (after.isPresent() && before.isPresent()) {
+                pushUndo("the edit of the visit of " + line.date(), () -> before.get().restoreEdited(file));
+                ctx.vm.reload();
+            }
+        });
+    }
+
+    private void deleteVisit(VisitLine line) {
+        stored(line).ifPresent(v -> {
+            Alert a = new Alert(Alert.AlertType.CONFIRMATION, "Delete the visit of " + line.date() + " with all its"
+                    + " trials? You can undo this until you close Shapetrail.", ButtonType.CANCEL, ButtonType.OK);
+            a.setHeaderText("Delete visit");
+            a.initOwner(ctx.window());
+            if (a.showAndWait().orElse(ButtonType.CANCEL) != ButtonType.OK) {
+                return;
+            }
+            Path file = ctx.loaded().file();
+            Optional<VisitSnapshot> before;
+            try {
+                before = OffFxThread.call(ctx.storing, () -> {
+                    Optional<VisitSnapshot> snap = VisitSnapshot.read(file, v.id());
+                    try (Database db = Database.openExisting(file)) {
+                        db.inTransaction(tx -> tx.visits().delete(v.id()));
+                    }
+                    return snap;
+                });
+            } catch (RuntimeException e) {
+                ctx.vm.errorProperty().set("The visit was not deleted: " + Errors.describe(e));
+                return;
+            }
+            before.ifPresent(b -> pushUndo("the deletion of the visit of " + line.date(), () -> b.restoreDeleted(file)));
+            ctx.vm.reload();
+        });
+    }
+
+    private void pushUndo(String what, Runnable action) {
+        undo.push(action);
+        pane.undo.setText("Undo " + what);
+        pane.undo.setDisable(false);
+    }
+
+    private void undoLast() {
+        Runnable r = undo.poll();
+        if (r != null) {
+            try {
+                OffFxThread.call(ctx.storing, () -> {
+                    r.run();
+                    return null;
+                });
+            } catch (RuntimeException e) {
+                undo.push(r); // still there to try again
+                ctx.vm.errorProperty().set("Nothing was undone: " + Errors.describe(e));
+            }
+            ctx.vm.reload();
+        }
+        pane.undo.setText("Undo last change");
+        pane.undo.setDisable(undo.isEmpty());
+    }
+
+    private void moveToSquad(Person p) {
+        Loaded l = ctx.loaded();
+        if (l == null) {
+            return;
+        }
+        Dialog<ButtonType> d = new Dialog<>();
+        d.setTitle("Move to squad");
+        d.setHeaderText(p.displayName() + " moves to another squad (the current membership ends the day before),"
+                + " or leaves: choose \"" + LEAVES.name() + "\" and the last day.");
+        d.initOwner(ctx.window());
+        ComboBox<Squad> to = new ComboBox<>(FXCollections.observableArrayList(l.builder().academy().squads()));
+        to.getItems().add(LEAVES);
+        to.setId("move-to-squad");
+        to.setConverter(new StringConverter<>() {
+            @Override
+            public String toString(Squad s) {
+                return s == null ? "" : s.name();
+            }
+
+            @Override
+            public Squad fromString(String s) {
+                return null;
+            }
+        });
+        DatePicker from = new DatePicker(LocalDate.now());
+        from.setId("move-from");
+        GridPane g = new GridPane();
+        g.setHgap(8);
+        g.setVgap(8);
+        g.addRow(0, new Label("Squad"), to);
+        Label fromLabel = new Label("From");
+        fromLabel.textProperty().bind(Bindings.when(to.valueProperty().isEqualTo(LEAVES)).then("Last day")
+                .otherwise("From"));
+        g.addRow(1, fromLabel, from);
+        d.getDialogPane().setContent(g);
+        d.getDialogPane().getButtonTypes().addAll(ButtonType.CANCEL, ButtonType.OK);
+        if (d.showAndWait().orElse(ButtonType.CANCEL) == ButtonType.OK) {
+            ctx.organise(() -> to.getValue() == LEAVES ? Organising.leave(l.file(), p.id(), from.getValue())
+                    : Organising.moveToSquad(l.file(), p.id(), to.getValue(), from.getValue()));
+        }
+    }
+
+    /** Shows the pages of the selected person's letter for the period, as they will print. */
+    void previewLetter(LetterSettings settings) {
+        Optional<PersonHistory> h = ctx.vm.selectedHistory();
+        if (h.isEmpty()) {
+            return;
+        }
+        Loaded l = ctx.loaded();
+        ctx.vm.runner().run("Preparing the letter", () -> LetterPreview.pages(
+                new LetterComposer(l.builder(), settings, ctx.locale).compose(h.get()), 80), pages -> {
+                    javafx.scene.layout.VBox box = new javafx.scene.layout.VBox(10);
+                    box.setId("letter-preview");
+                    for (var img : pages) {
+                        javafx.scene.image.ImageView v = new javafx.scene.image.ImageView(
+                                javafx.embed.swing.SwingFXUtils.toFXImage(img, null));
+                        v.setPreserveRatio(true);
+                        v.setFitWidth(640);
+                        box.getChildren().add(v);
+                    }
+                    javafx.stage.Stage s = new javafx.stage.Stage();
+                    s.initOwner(ctx.window());
+                    s.setTitle("Letter preview — " + h.get().person().displayName());
+                    s.setScene(new javafx.scene.Scene(new javafx.scene.control.ScrollPane(box), 680, 820));
+                    s.show();
+                    lastPreview = s;
+                }, t -> ctx.vm.errorProperty().set(Errors.describe(t)));
+    }
+}

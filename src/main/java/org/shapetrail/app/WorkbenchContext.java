@@ -1,0 +1,90 @@
+package org.shapetrail.app;
+
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.function.BiFunction;
+import java.util.function.LongConsumer;
+import java.util.function.Supplier;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.scene.control.TextInputDialog;
+import javafx.stage.Window;
+import org.shapetrail.store.Person;
+
+/**
+ * What every page of the workbench shares: the state (the view model), the reader's locale, the window
+ * that owns dialogs, the flag that takes input away while something is written, and the actions more than
+ * one page offers (organising changes, the person form, showing a person).
+ */
+final class WorkbenchContext {
+    final WorkbenchViewModel vm;
+    final Locale locale;
+    private final Supplier<Window> window;
+    /** True while something is being written: the window takes no input meanwhile. */
+    final BooleanProperty storing = new SimpleBooleanProperty();
+    private LongConsumer showPerson = id -> { };
+
+    WorkbenchContext(WorkbenchViewModel vm, Locale locale, Supplier<Window> window) {
+        this.vm = vm;
+        this.locale = locale;
+        this.window = window;
+    }
+
+    Window window() {
+        return window.get();
+    }
+
+    /** The open file as read, or null before one is open. */
+    Loaded loaded() {
+        return vm.loadedProperty().get();
+    }
+
+    void onShowPerson(LongConsumer c) {
+        showPerson = c;
+    }
+
+    /** Selects the person and brings their page forward. */
+    void showPerson(long personId) {
+        showPerson.accept(personId);
+    }
+
+    /** Asks for one name, then makes the organising change off the FX thread; a refusal is shown as it is. */
+    void askAndOrganise(String title, String prompt, BiFunction<Path, String, Optional<String>> change) {
+        Loaded l = loaded();
+        if (l == null) {
+            return;
+        }
+        TextInputDialog d = new TextInputDialog();
+        d.setTitle(title);
+        d.setHeaderText(prompt);
+        d.initOwner(window());
+        d.showAndWait().ifPresent(name -> organise(() -> change.apply(l.file(), name)));
+    }
+
+    /** Makes a change off the FX thread; a refusal goes to the error line, success reloads the file. */
+    void organise(Supplier<Optional<String>> change) {
+        Optional<String> refused;
+        try {
+            refused = OffFxThread.call(storing, change::get);
+        } catch (RuntimeException e) {
+            refused = Optional.of(Errors.describe(e));
+        }
+        if (refused.isPresent()) {
+            vm.errorProperty().set(refused.get());
+        } else {
+            vm.errorProperty().set("");
+            vm.reload();
+        }
+    }
+
+    /** The form for a new person (null) or for editing one. */
+    void personForm(Person editing) {
+        Loaded l = loaded();
+        if (l == null) {
+            return;
+        }
+        PersonFormView.show(new PersonFormViewModel(l.file(), l.builder().academy().squads(), locale, editing),
+                window()).ifPresent(p -> vm.reload());
+    }
+}
