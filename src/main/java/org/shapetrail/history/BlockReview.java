@@ -1,6 +1,5 @@
 package org.shapetrail.history;
 
-import java.time.LocalDate;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -16,8 +15,9 @@ import org.shapetrail.store.Person;
 import org.shapetrail.store.TrainingBlock;
 
 /**
- * A training block reviewed: for each member of the squad during the block, the rated visit nearest its
- * start and the one nearest its end, each within a window of days; the change with its verdict; members
+ * A training block reviewed: for each member of the squad during the block, the visits chosen for the
+ * block or by default the rated visit nearest the start from before it and nearest the end from after it,
+ * each within a window of days; the change with its verdict; members
  * without both visits listed by name with the reason; and the group statistics.
  *
  * @param result the group statistics, or null when fewer than two athletes have both visits
@@ -39,29 +39,42 @@ public record BlockReview(TrainingBlock block, int windowDays, List<Athlete> ath
         return of(b, block, windowDays, b::history);
     }
 
-    /** As above, taking each member's history from {@code histories} (already computed ones). */
+    /**
+     * As above, taking each member's history from {@code histories} (already computed ones). A member's
+     * visits are those chosen for the block, or by default the latest rated visit in the {@code windowDays}
+     * up to the start and the earliest in the {@code windowDays} from the end.
+     */
     public static BlockReview of(HistoryBuilder b, TrainingBlock block, int windowDays,
                                  java.util.function.Function<Person, PersonHistory> histories) {
         Academy a = b.academy();
         List<Athlete> athletes = new ArrayList<>();
         List<Missing> missing = new ArrayList<>();
-        List<Long> members = a.memberships().stream().filter(m -> m.squadId() == block.squadId())
-                .filter(m -> overlaps(m, block)).map(Membership::personId).distinct().toList();
-        for (long id : members) {
+        for (long id : members(a, block)) {
             Person p = a.person(id).orElseThrow();
             PersonHistory h = histories.apply(p);
-            Optional<VisitResult> before = nearest(h.rated(), block.startsOn(), windowDays);
-            Optional<VisitResult> after = nearest(h.rated(), block.endsOn(), windowDays);
+            TrainingBlock.Pick pick = block.picks().get(id);
+            Optional<VisitResult> before;
+            Optional<VisitResult> after;
+            if (pick != null) {
+                before = h.rated().stream().filter(r -> r.visit().id() == pick.beforeVisitId()).findFirst();
+                after = h.rated().stream().filter(r -> r.visit().id() == pick.afterVisitId()).findFirst();
+                if (before.isEmpty() || after.isEmpty()) {
+                    missing.add(new Missing(p, "a visit chosen for the block has no rating (a Heath-Carter site is"
+                            + " missing); choose another"));
+                    continue;
+                }
+            } else {
+                before = defaultBefore(h.rated(), block, windowDays);
+                after = defaultAfter(h.rated(), block, windowDays);
+            }
             if (before.isEmpty() && after.isEmpty()) {
-                missing.add(new Missing(p, "no rated visit within " + windowDays + " days of the start or the end"));
+                missing.add(new Missing(p, "no rated visit in the " + windowDays + " days up to the start or from the end"));
             } else if (before.isEmpty()) {
-                missing.add(new Missing(p, "no rated visit within " + windowDays + " days of the start ("
+                missing.add(new Missing(p, "no rated visit in the " + windowDays + " days up to the start ("
                         + block.startsOn() + ")"));
             } else if (after.isEmpty()) {
-                missing.add(new Missing(p, "no rated visit within " + windowDays + " days of the end ("
+                missing.add(new Missing(p, "no rated visit in the " + windowDays + " days from the end ("
                         + block.endsOn() + ")"));
-            } else if (before.get().visit().id() == after.get().visit().id()) {
-                missing.add(new Missing(p, "the same visit is nearest to both the start and the end"));
             } else {
                 athletes.add(new Athlete(p, before.get(), after.get(), b.verdict(before.get(), after.get())));
             }
@@ -78,14 +91,30 @@ public record BlockReview(TrainingBlock block, int windowDays, List<Athlete> ath
         return new BlockReview(block, windowDays, athletes, missing, result);
     }
 
+    /** Ids of the people who belonged to the block's squad at some time during the block. */
+    public static List<Long> members(Academy a, TrainingBlock block) {
+        return a.memberships().stream().filter(m -> m.squadId() == block.squadId()).filter(m -> overlaps(m, block))
+                .map(Membership::personId).distinct().toList();
+    }
+
+    /** The default before visit: the latest rated one on or before the start, at most {@code window} days before. */
+    public static Optional<VisitResult> defaultBefore(List<VisitResult> rated, TrainingBlock block, int window) {
+        return rated.stream().filter(r -> {
+            long d = ChronoUnit.DAYS.between(r.visit().measuredAt().toLocalDate(), block.startsOn());
+            return d >= 0 && d <= window;
+        }).reduce((x, y) -> y);
+    }
+
+    /** The default after visit: the earliest rated one on or after the end, at most {@code window} days after. */
+    public static Optional<VisitResult> defaultAfter(List<VisitResult> rated, TrainingBlock block, int window) {
+        return rated.stream().filter(r -> {
+            long d = ChronoUnit.DAYS.between(block.endsOn(), r.visit().measuredAt().toLocalDate());
+            return d >= 0 && d <= window;
+        }).findFirst();
+    }
+
     private static boolean overlaps(Membership m, TrainingBlock b) {
         return !m.joinedOn().isAfter(b.endsOn()) && (m.leftOn() == null || !m.leftOn().isBefore(b.startsOn()));
     }
 
-    static Optional<VisitResult> nearest(List<VisitResult> rated, LocalDate day, int window) {
-        return rated.stream()
-                .filter(r -> Math.abs(ChronoUnit.DAYS.between(day, r.visit().measuredAt().toLocalDate())) <= window)
-                .min(Comparator.comparingLong(r -> Math.abs(ChronoUnit.DAYS.between(day,
-                        r.visit().measuredAt().toLocalDate()))));
-    }
 }

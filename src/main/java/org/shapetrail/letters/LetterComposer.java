@@ -279,10 +279,7 @@ public final class LetterComposer {
             if (block.endsOn().isBefore(settings.from()) || block.startsOn().isAfter(settings.to())) {
                 continue;
             }
-            boolean member = builder.academy().memberships().stream().anyMatch(m -> m.personId() == h.person().id()
-                    && m.squadId() == block.squadId() && !m.joinedOn().isAfter(block.endsOn())
-                    && (m.leftOn() == null || !m.leftOn().isBefore(block.startsOn())));
-            if (!member) {
+            if (!org.shapetrail.history.BlockReview.members(builder.academy(), block).contains(h.person().id())) {
                 continue;
             }
             var review = org.shapetrail.history.BlockReview.of(builder, block,

@@ -16,11 +16,11 @@ import java.util.List;
  */
 public final class ContentDigest {
     static final List<String> TABLES = List.of("person", "squad", "membership", "measurer", "visit", "trial",
-            "visit_rating", "training_block");
+            "visit_rating", "training_block", "block_pick");
     /** The key columns of each table, which give its rows a total order. */
     private static final java.util.Map<String, String> ORDER = java.util.Map.of("person", "id", "squad", "id",
             "membership", "person_id, squad_id, joined_on", "measurer", "id", "visit", "id",
-            "trial", "visit_id, site, trial_no", "visit_rating", "visit_id", "training_block", "id");
+            "trial", "visit_id, site, trial_no", "visit_rating", "visit_id", "training_block", "id", "block_pick", "block_id, person_id");
 
     private ContentDigest() {
     }

@@ -17,7 +17,8 @@ import java.util.List;
 public final class Migrations {
     /** Script names in order; index + 1 is the version each produces. */
     static final List<String> SCRIPTS = List.of("V1__people_and_visits.sql", "V2__ratings_and_blocks.sql",
-            "V3__predicted_adult_stature.sql", "V4__backup_record.sql");
+            "V3__predicted_adult_stature.sql", "V4__backup_record.sql",
+            "V5__block_aims_and_picks.sql");
 
     private Migrations() {
     }

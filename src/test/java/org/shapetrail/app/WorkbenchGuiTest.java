@@ -311,7 +311,7 @@ class WorkbenchGuiTest {
                 .getSelectionModel().select(1));
         WaitForAsyncUtils.waitForFxEvents();
         var l = workbench.viewModel().loadedProperty().get();
-        var review = org.shapetrail.history.BlockReview.of(l.builder(), l.builder().academy().blocks().get(0), 21);
+        var review = org.shapetrail.history.BlockReview.of(l.builder(), l.builder().academy().blocks().stream().filter(x -> x.name().equals(org.shapetrail.store.demo.DemoAcademy.BLOCK_NAME)).findFirst().orElseThrow(), 21);
         Label summary = robot.lookup("#block-summary").queryAs(Label.class);
         assertTrue(summary.getText().contains(review.result().beyondNoise() + " of " + review.result().n()
                 + " changed beyond measurement noise"), summary.getText());

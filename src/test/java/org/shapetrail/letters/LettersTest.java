@@ -167,7 +167,7 @@ class LettersTest {
     void aSeniorInTheBlockGetsTheBlockSectionWithTheVerdict() {
         PersonHistory h = history("Freya Breakwater");
         Letter l = new LetterComposer(builder, YEAR, Locale.UK).compose(h);
-        var review = org.shapetrail.history.BlockReview.of(builder, builder.academy().blocks().get(0), 21);
+        var review = org.shapetrail.history.BlockReview.of(builder, builder.academy().blocks().stream().filter(x -> x.name().equals(org.shapetrail.store.demo.DemoAcademy.BLOCK_NAME)).findFirst().orElseThrow(), 21);
         var me = review.athletes().stream().filter(a -> a.person().id() == h.person().id()).findFirst().orElseThrow();
         String text = l.allText();
         assertTrue(text.contains("took part in the Winter strength block"), text);

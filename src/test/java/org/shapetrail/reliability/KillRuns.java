@@ -69,11 +69,11 @@ public final class KillRuns {
             var rs = s.executeQuery("PRAGMA user_version");
             rs.next();
             version = rs.getInt(1);
-            rs = s.executeQuery("SELECT count(*) FROM sqlite_master WHERE name = 'backup_record'");
+            rs = s.executeQuery("SELECT count(*) FROM sqlite_master WHERE name = 'block_pick'");
             rs.next();
-            boolean v4Table = rs.getInt(1) == 1;
-            if (version < 4 == v4Table) {
-                return "schema " + version + " with" + (v4Table ? "" : "out") + " the version-4 table: half migrated";
+            boolean v5Table = rs.getInt(1) == 1;
+            if (version < 5 == v5Table) {
+                return "schema " + version + " with" + (v5Table ? "" : "out") + " the version-5 table: half migrated";
             }
             s.executeUpdate("VACUUM INTO '" + look.toString().replace("'", "''") + "'");
         }
@@ -113,8 +113,10 @@ public final class KillRuns {
                 sample(template);
                 try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + template.toAbsolutePath());
                      Statement s = c.createStatement()) {
-                    s.executeUpdate("DROP TABLE backup_record"); // as schema 3 left a file
-                    s.executeUpdate("PRAGMA user_version = 3");
+                    // as schema 4 left a file: without what version 5 adds
+                    s.executeUpdate("DROP TABLE block_pick");
+                    s.executeUpdate("ALTER TABLE training_block DROP COLUMN aim");
+                    s.executeUpdate("PRAGMA user_version = 4");
                 }
             }
             default -> throw new IllegalStateException();

@@ -368,8 +368,8 @@ class ScienceEndToEndTest {
         List<double[]> before = new ArrayList<>();
         List<double[]> after = new ArrayList<>();
         for (long id : members) {
-            RawVisit b = nearest(id, start);
-            RawVisit a = nearest(id, end);
+            RawVisit b = nearest(id, start, -1);
+            RawVisit a = nearest(id, end, 1);
             if (b != null && a != null && b.id() != a.id()) {
                 before.add(heathCarter(finals(b)));
                 after.add(heathCarter(finals(a)));
@@ -419,13 +419,16 @@ class ScienceEndToEndTest {
         assertEquals(p, Double.parseDouble(summary.get("p")), 0.00006);
     }
 
-    /** The rated visit nearest {@code day} within 21 days (BlockReview.DEFAULT_WINDOW_DAYS), or null. */
-    static RawVisit nearest(long person, LocalDate day) {
+    /**
+     * The rated visit nearest {@code day} within 21 days on one side of it (BlockReview's default: up to the
+     * start, side −1, or from the end, side +1), or null.
+     */
+    static RawVisit nearest(long person, LocalDate day, int side) {
         RawVisit best = null;
         long bestDays = Long.MAX_VALUE;
         for (RawVisit v : VISITS) {
-            long days = Math.abs(ChronoUnit.DAYS.between(day, v.day()));
-            if (v.person() == person && rated(v) && days <= 21 && days < bestDays) {
+            long days = side * ChronoUnit.DAYS.between(day, v.day());
+            if (v.person() == person && rated(v) && days >= 0 && days <= 21 && days < bestDays) {
                 best = v;
                 bestDays = days;
             }

@@ -51,6 +51,13 @@ public final class DemoAcademy {
     public static final String BLOCK_NAME = "Winter strength block";
     public static final LocalDate BLOCK_START = LocalDate.of(2026, 1, 12);
     public static final LocalDate BLOCK_END = LocalDate.of(2026, 3, 22);
+    /**
+     * A junior squad's block between two of its usual measuring days (30 December and 15 April), for the
+     * question whether a change is training or growth: nobody was built to change by it.
+     */
+    public static final String JUNIOR_BLOCK_NAME = "Rowing juniors winter block";
+    public static final LocalDate JUNIOR_BLOCK_START = LocalDate.of(2026, 1, 5);
+    public static final LocalDate JUNIOR_BLOCK_END = LocalDate.of(2026, 4, 10);
 
     private static final String[] FIRST_BOYS = {"Arlo", "Caspian", "Ewan", "Gideon", "Hollis", "Jory", "Marek",
         "Orrin", "Soren", "Ulric", "Xander", "Zeb", "Teodor", "Bram", "Lorcan", "Perrin", "Rafe", "Idris", "Mateus",
@@ -243,7 +250,10 @@ public final class DemoAcademy {
             }
         }
         List<Visit> saved = tx.visits().insertAll(visits);
-        tx.blocks().insert(new TrainingBlock(0, BLOCK_NAME, seniors.id(), BLOCK_START, BLOCK_END));
+        tx.blocks().insert(new TrainingBlock(0, BLOCK_NAME, seniors.id(), BLOCK_START, BLOCK_END,
+                "Upper-body and calf strength, three sessions a week for ten weeks", java.util.Map.of()));
+        tx.blocks().insert(new TrainingBlock(0, JUNIOR_BLOCK_NAME, rowing.id(), JUNIOR_BLOCK_START, JUNIOR_BLOCK_END,
+                "Ergometer endurance and general strength, three sessions a week", java.util.Map.of()));
 
         // a rater's in-person ratings beside the anthropometric ones, for the seniors' block-start visits
         int rated = 0;
