@@ -3,6 +3,7 @@ package org.shapetrail.app;
 /** Age bands of the people filter, by age at the latest visit. */
 public enum AgeBand {
     ALL("All ages", 0, 200),
+    JUNIORS("Juniors (under 18)", 0, 18),
     UNDER_12("Under 12", 0, 12),
     FROM_12_TO_13("12–13", 12, 14),
     FROM_14_TO_15("14–15", 14, 16),

@@ -18,8 +18,12 @@ import org.shapetrail.noise.Verdict;
  * whom), each athlete's before→after arrow on the chart styled by verdict, the component profile before
  * and after, the table of athletes and who was left out.
  */
-public record BlockPage(String summary, List<String> athletes, List<String> leftOut, ChartModel chart,
-                        ChartModel profile) {
+public record BlockPage(String summary, List<String> athletes, List<AthleteLine> rows, List<String> leftOut,
+                        ChartModel chart, ChartModel profile) {
+    /** One athlete's line of the table: every cell in full. */
+    public record AthleteLine(String name, String before, String after, String change, String sad, String words) {
+    }
+
     public static BlockPage of(BlockReview r, Locale locale) {
         BlockResult g = r.result();
         String summary;
@@ -48,10 +52,18 @@ public record BlockPage(String summary, List<String> athletes, List<String> left
             summary = sb.toString();
         }
         List<String> athletes = new ArrayList<>();
+        List<AthleteLine> rows = new ArrayList<>();
+        java.time.format.DateTimeFormatter dates = java.time.format.DateTimeFormatter.ofLocalizedDate(
+                java.time.format.FormatStyle.MEDIUM).withLocale(locale);
         SomatochartBuilder chart = new SomatochartBuilder(r.block().name(), locale).withoutLegend();
         for (BlockReview.Athlete a : r.athletes()) {
-            athletes.add(a.person().displayName() + ": " + a.change().from().toDisplayString() + " → "
-                    + a.change().to().toDisplayString() + ", " + PersonPage.words(a.change(), locale));
+            String words = a.person().displayName() + ": " + a.change().from().toDisplayString() + " → "
+                    + a.change().to().toDisplayString() + ", " + PersonPage.words(a.change(), locale);
+            athletes.add(words);
+            rows.add(new AthleteLine(a.person().displayName(), a.before().visit().measuredAt().toLocalDate().format(dates)
+                    + "  " + a.change().from().toDisplayString(), a.after().visit().measuredAt().toLocalDate()
+                    .format(dates) + "  " + a.change().to().toDisplayString(), PersonPage.cell(a.change(), locale),
+                    Numbers.fmt(locale, a.change().sad(), 2), words));
             String colour = a.change().verdict() == Verdict.BEYOND_NOISE ? Palette.series(0) : Palette.MUTED;
             chart.arrow(a.change().from(), a.change().to(), a.change().verdict(), colour);
             chart.point(a.change().to(), null, a.person().displayName() + "\n" + a.change().to().toDisplayString() + "\n"
@@ -65,7 +77,7 @@ public record BlockPage(String summary, List<String> athletes, List<String> left
             profile = new ProfileChartBuilder(r.block().name()).line("before", g.before().meanRating(), sds(r, true))
                     .line("after", g.after().meanRating(), sds(r, false)).build();
         }
-        return new BlockPage(summary, athletes, left, chart.buildAroundData(8), profile);
+        return new BlockPage(summary, athletes, rows, left, chart.buildAroundData(8), profile);
     }
 
     /** Sample SD of each component over the athletes, before or after (Commons Math). */

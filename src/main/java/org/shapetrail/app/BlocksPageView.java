@@ -12,7 +12,9 @@ import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.VBox;
 import org.shapetrail.chart.fx.ChartCanvas;
+import java.nio.file.Path;
 import org.shapetrail.history.BlockReview;
+import org.shapetrail.store.Database;
 import org.shapetrail.store.Squad;
 import org.shapetrail.store.TrainingBlock;
 
@@ -22,7 +24,12 @@ final class BlocksPageView {
     private final ComboBox<String> squadChoice = new ComboBox<>();
     private final ComboBox<String> blockChoice = new ComboBox<>();
     private final Label summary = new Label();
-    private final javafx.scene.control.ListView<String> athletes = new javafx.scene.control.ListView<>();
+    private final javafx.scene.control.TableView<BlockPage.AthleteLine> athletes = new javafx.scene.control.TableView<>();
+    private final javafx.scene.control.Button edit = new javafx.scene.control.Button("Edit block…");
+    private final javafx.scene.control.Button delete = new javafx.scene.control.Button("Delete block…");
+    private final javafx.scene.control.Button undo = new javafx.scene.control.Button("Undo");
+    /** The blocks deleted in this session, newest first, for undo. */
+    private final java.util.Deque<TrainingBlock> deleted = new java.util.ArrayDeque<>();
     private final Label leftOut = new Label();
     private final ChartCanvas chart = new ChartCanvas();
     private final ChartCanvas profile = new ChartCanvas();
@@ -38,6 +45,31 @@ final class BlocksPageView {
         summary.setId("block-summary");
         summary.setWrapText(true);
         athletes.setId("block-athletes");
+        athletes.setPlaceholder(new Label("Nobody in the squad has visits for both ends of this block."));
+        column("Athlete", BlockPage.AthleteLine::name, 150);
+        column("Before", BlockPage.AthleteLine::before, 150);
+        column("After", BlockPage.AthleteLine::after, 150);
+        column("Change ÷ noise limit", BlockPage.AthleteLine::change, 150);
+        column("Moved (SAD)", BlockPage.AthleteLine::sad, 85);
+        athletes.setRowFactory(t -> new javafx.scene.control.TableRow<>() {
+            @Override
+            protected void updateItem(BlockPage.AthleteLine line, boolean empty) {
+                super.updateItem(line, empty);
+                setTooltip(empty || line == null ? null : new javafx.scene.control.Tooltip(line.words()));
+            }
+        });
+        javafx.scene.control.Button create = new javafx.scene.control.Button("New block…");
+        create.setId("new-block");
+        create.setOnAction(e -> squad().ifPresent(s -> form(s, null)));
+        edit.setId("edit-block");
+        edit.setOnAction(e -> chosen().ifPresent(b -> squad().ifPresent(s -> form(s, b))));
+        delete.setId("delete-block");
+        delete.setOnAction(e -> chosen().ifPresent(this::delete));
+        undo.setId("undo-block");
+        undo.setDisable(true);
+        undo.setOnAction(e -> undoDelete());
+        edit.disableProperty().bind(blockChoice.valueProperty().isNull());
+        delete.disableProperty().bind(blockChoice.valueProperty().isNull());
         leftOut.setId("block-left-out");
         leftOut.setWrapText(true);
         chart.setId("block-chart");
@@ -48,7 +80,9 @@ final class BlocksPageView {
                 + " ◆ group means (grey before, amber after) with their dispersion");
         key.getStyleClass().add("hint");
         key.setWrapText(true);
-        VBox head = new VBox(6, new HBox(8, squadChoice, blockChoice), summary, leftOut);
+        javafx.scene.layout.FlowPane actions = new javafx.scene.layout.FlowPane(8, 6, squadChoice, blockChoice, create,
+                edit, delete, undo);
+        VBox head = new VBox(6, actions, summary, leftOut);
         head.setPadding(new Insets(10, 12, 8, 12));
         SplitPane charts = new SplitPane(chart, profile);
         charts.setOrientation(Orientation.VERTICAL);
@@ -56,13 +90,87 @@ final class BlocksPageView {
         BorderPane chartBox = new BorderPane(charts);
         chartBox.setBottom(key);
         SplitPane split = new SplitPane(athletes, chartBox);
-        split.setDividerPositions(0.42);
+        split.setDividerPositions(0.55);
         root.setCenter(split);
         root.setTop(head);
     }
 
     Parent root() {
         return root;
+    }
+
+    private void column(String name, java.util.function.Function<BlockPage.AthleteLine, String> f, double w) {
+        javafx.scene.control.TableColumn<BlockPage.AthleteLine, String> c = new javafx.scene.control.TableColumn<>(name);
+        c.setCellValueFactory(d -> new javafx.beans.property.SimpleStringProperty(f.apply(d.getValue())));
+        c.setPrefWidth(w);
+        athletes.getColumns().add(c);
+    }
+
+    private Optional<TrainingBlock> chosen() {
+        Loaded l = ctx.loaded();
+        Optional<Squad> s = squad();
+        String name = blockChoice.getValue();
+        if (l == null || s.isEmpty() || name == null) {
+            return Optional.empty();
+        }
+        return l.builder().academy().blocks().stream().filter(b -> b.squadId() == s.get().id() && b.name().equals(name))
+                .findFirst();
+    }
+
+    /** The form for a new block of the squad or an edit of one; a saved block is shown. */
+    private void form(Squad s, TrainingBlock editing) {
+        BlockFormView.show(new BlockFormViewModel(ctx.loaded(), s, editing), ctx.window(), ctx.locale).ifPresent(b -> {
+            blockChoice.setValue(null);
+            pendingBlock = b.name();
+            ctx.vm.reload();
+        });
+    }
+
+    /** The block to select once the file is read again. */
+    private String pendingBlock;
+
+    private void delete(TrainingBlock b) {
+        javafx.scene.control.Alert a = new javafx.scene.control.Alert(javafx.scene.control.Alert.AlertType.CONFIRMATION,
+                "Delete the training block " + b.name() + " (" + b.startsOn() + " to " + b.endsOn() + ")? The visits"
+                        + " stay; only the block and its choice of visits go. You can undo this until you close"
+                        + " Shapetrail.", javafx.scene.control.ButtonType.CANCEL, javafx.scene.control.ButtonType.OK);
+        a.setHeaderText("Delete training block");
+        a.initOwner(ctx.window());
+        if (a.showAndWait().orElse(javafx.scene.control.ButtonType.CANCEL) != javafx.scene.control.ButtonType.OK) {
+            return;
+        }
+        Path file = ctx.loaded().file();
+        boolean done = ctx.organise(() -> {
+            try (Database db = Database.openExisting(file)) {
+                db.inTransaction(tx -> tx.blocks().delete(b.id()));
+            }
+            return Optional.empty();
+        });
+        if (done) {
+            deleted.push(b);
+        }
+        undo.setDisable(deleted.isEmpty());
+        undo.setText(deleted.isEmpty() ? "Undo" : "Undo the deletion of " + deleted.peek().name());
+    }
+
+    private void undoDelete() {
+        TrainingBlock b = deleted.peek();
+        if (b == null) {
+            return;
+        }
+        Path file = ctx.loaded().file();
+        pendingBlock = b.name();
+        boolean done = ctx.organise(() -> {
+            try (Database db = Database.openExisting(file)) {
+                db.inTransaction(tx -> tx.blocks().insert(b.withId(0)));
+            }
+            return Optional.empty();
+        });
+        if (done) {
+            deleted.pop();
+        }
+        undo.setDisable(deleted.isEmpty());
+        undo.setText(deleted.isEmpty() ? "Undo" : "Undo the deletion of " + deleted.peek().name());
     }
 
     ComboBox<String> squadChoice() {
@@ -101,7 +209,8 @@ final class BlocksPageView {
         }
         List<String> names = ctx.loaded().builder().academy().blocks().stream().filter(b -> b.squadId() == s.get().id())
                 .map(TrainingBlock::name).toList();
-        String keep = blockChoice.getValue();
+        String keep = pendingBlock != null ? pendingBlock : blockChoice.getValue();
+        pendingBlock = null;
         blockChoice.getItems().setAll(names);
         blockChoice.setValue(keep != null && names.contains(keep) ? keep : names.isEmpty() ? null
                 : names.get(names.size() - 1));
@@ -126,7 +235,7 @@ final class BlocksPageView {
                     BlockPage page = BlockPage.of(BlockReview.of(l.builder(), b, BlockReview.DEFAULT_WINDOW_DAYS,
                             p -> l.histories().get(p.id())), ctx.locale);
                     summary.setText(page.summary());
-                    athletes.getItems().setAll(page.athletes());
+                    athletes.getItems().setAll(page.rows());
                     leftOut.setText(page.leftOut().isEmpty() ? "" : "Left out: " + String.join("; ", page.leftOut()));
                     chart.setModel(page.chart());
                     profile.setModel(page.profile());

@@ -52,22 +52,70 @@ final class PeopleListView {
         CheckBox rapid = new CheckBox("Rapid growth only");
         rapid.setId("rapid-filter");
         rapid.selectedProperty().bindBidirectional(vm.rapidOnlyProperty());
-        table = PeopleTable.create("people", ctx.locale, false);
-        table.setItems(vm.rows());
+        PeopleTable people = new PeopleTable("people", ctx.locale, false, vm.rows());
+        table = people.table();
         table.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
             if (b != null) {
                 vm.selectedProperty().set(b);
             }
         });
+        // the selection survives a reload (after a save the rows are new objects for the same people)
+        vm.selectedProperty().addListener((o, a, b) -> {
+            if (b != null && table.getSelectionModel().getSelectedItem() != b) {
+                table.getSelectionModel().select(b);
+            }
+        });
+        ComboBox<Period.Kind> period = new ComboBox<>();
+        period.setId("period-choice");
+        period.getItems().setAll(Period.Kind.values());
+        period.setValue(Period.Kind.LATEST);
+        period.setTooltip(new javafx.scene.control.Tooltip("The span of the change column: each person's first rated"
+                + " visit in it against their last"));
+        javafx.scene.control.DatePicker from = new javafx.scene.control.DatePicker(java.time.LocalDate.now().minusMonths(6));
+        from.setId("period-from");
+        javafx.scene.control.DatePicker to = new javafx.scene.control.DatePicker(java.time.LocalDate.now());
+        to.setId("period-to");
+        from.setPrefWidth(130);
+        to.setPrefWidth(130);
+        Runnable apply = () -> {
+            java.time.LocalDate today = java.time.LocalDate.now();
+            Period.Kind k = period.getValue();
+            from.setVisible(k == Period.Kind.SINCE || k == Period.Kind.BETWEEN);
+            from.setManaged(from.isVisible());
+            to.setVisible(k == Period.Kind.BETWEEN);
+            to.setManaged(to.isVisible());
+            Period p;
+            try {
+                p = switch (k) {
+                    case LATEST -> Period.LATEST;
+                    case SEASON -> Period.season(today);
+                    case YEAR -> Period.lastYear(today);
+                    case SINCE -> new Period(k, from.getValue(), today);
+                    case BETWEEN -> new Period(k, from.getValue(), to.getValue());
+                };
+            } catch (RuntimeException e) {
+                vm.errorProperty().set("Choose a first day on or before the last day for the change column.");
+                return;
+            }
+            vm.errorProperty().set("");
+            vm.periodProperty().set(p);
+            people.setPeriod(p);
+        };
+        period.valueProperty().addListener((o, a, b) -> apply.run());
+        from.valueProperty().addListener((o, a, b) -> apply.run());
+        to.valueProperty().addListener((o, a, b) -> apply.run());
+        apply.run();
         Button newPerson = new Button("New person…");
         newPerson.setId("new-person");
         newPerson.setOnAction(e -> ctx.personForm(null));
         Label count = new Label();
         count.setId("people-count");
         vm.rows().addListener((ListChangeListener<PersonRow>) c -> count.setText(
-                vm.rows().size() + " shown · click a column to sort (e.g. Growth for the fastest growing)"));
+                vm.rows().size() + " shown · click a column to sort (Growth or the change: largest first)"));
         HBox filters = new HBox(6, squad, age, maturity);
-        root = new VBox(6, search, filters, new HBox(12, rapid, newPerson), table, count);
+        HBox periodLine = new HBox(6, new Label("Change over"), period, from, to);
+        periodLine.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+        root = new VBox(6, search, filters, periodLine, new HBox(12, rapid, newPerson), table, count);
         root.setPadding(new Insets(8));
         VBox.setVgrow(table, Priority.ALWAYS);
     }

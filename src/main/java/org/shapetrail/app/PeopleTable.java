@@ -1,47 +1,68 @@
 package org.shapetrail.app;
 
+import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.List;
 import java.util.Locale;
 import java.util.function.Function;
 import javafx.beans.property.SimpleObjectProperty;
+import javafx.collections.ObservableList;
+import javafx.collections.transformation.SortedList;
 import javafx.scene.control.Label;
 import javafx.scene.control.TableCell;
 import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
 import javafx.scene.control.Tooltip;
+import javafx.scene.text.Font;
+import javafx.scene.text.Text;
 
-/** A sortable table of people rows, used by the people browser and the squad page. */
+/**
+ * A sortable table of people rows, used by the people browser and the squad page. Columns are as wide as
+ * their widest text, so no header or cell is cut short; each header says in its tooltip what the column
+ * holds. The first click on the change or growth column puts the largest first; sorting and the selection
+ * survive a reload.
+ */
 final class PeopleTable {
-    private PeopleTable() {
+    private final TableView<PersonRow> table = new TableView<>();
+    private final Locale locale;
+    private final List<Fitted> fitted = new ArrayList<>();
+    private final Label changeHeader = new Label("Latest change");
+
+    /** A column with the text each row shows in it, for sizing. */
+    private record Fitted(TableColumn<PersonRow, ?> column, Function<PersonRow, String> text, Label header) {
     }
 
-    static TableView<PersonRow> create(String id, Locale locale, boolean compact) {
-        TableView<PersonRow> t = new TableView<>();
-        t.setId(id);
-        t.setPlaceholder(new Label("Nobody matches"));
-        t.getColumns().add(text("Name", PersonRow::name, 150));
-        t.getColumns().add(number("Age", PersonRow::age, 1, locale, 48));
+    PeopleTable(String id, Locale locale, boolean compact, ObservableList<PersonRow> rows) {
+        this.locale = locale;
+        table.setId(id);
+        table.setPlaceholder(new Label("Nobody matches"));
+        SortedList<PersonRow> sorted = new SortedList<>(rows);
+        sorted.comparatorProperty().bind(table.comparatorProperty());
+        table.setItems(sorted);
+        add(text("Name", PersonRow::name), PersonRow::name, "Name", "The person's name; click to open their page.");
+        TableColumn<PersonRow, PersonRow> age = custom(PersonRow::age, r -> Numbers.fmt(locale, r.age(), 1), false);
+        add(age, r -> Numbers.fmt(locale, r.age(), 1), "Age", "Decimal age at the latest visit, years.");
         if (!compact) {
-            t.getColumns().add(text("Squad", PersonRow::squad, 100));
+            add(text("Squad", PersonRow::squad), PersonRow::squad, "Squad", "The squad the person belongs to today.");
         }
-        t.getColumns().add(text("Somatotype", PersonRow::rating, 85));
-        TableColumn<PersonRow, PersonRow> change = new TableColumn<>("Latest change");
-        change.setCellValueFactory(d -> new SimpleObjectProperty<>(d.getValue()));
-        change.setComparator(Comparator.comparingDouble(r -> Double.isNaN(r.latestMultiple()) ? -1 : r.latestMultiple()));
+        add(text("Somatotype", PersonRow::rating), PersonRow::rating, "Somatotype",
+                "The latest Heath-Carter rating, endomorphy-mesomorphy-ectomorphy.");
+        TableColumn<PersonRow, PersonRow> change = custom(PersonRow::multiple, this::changeText, true);
         change.setCellFactory(c -> new TableCell<>() {
             @Override
             protected void updateItem(PersonRow r, boolean empty) {
                 super.updateItem(r, empty);
                 getStyleClass().removeAll("beyond", "borderline", "within");
-                if (empty || r == null || r.verdict() == null) {
+                if (empty || r == null || r.change() == null) {
                     setText(null);
+                    setTooltip(null);
                     return;
                 }
                 // the verdict in words, so nothing depends on colour alone
-                setText(Numbers.fmt(locale, r.latestMultiple(), 2) + "× " + r.verdict().words());
-                setTooltip(new Tooltip("Moved SAD " + Numbers.fmt(locale, r.latestSad(), 2) + " somatotype units; the"
-                        + " change is " + Numbers.fmt(locale, r.latestMultiple(), 2) + " times the noise limit"
-                        + " (1.00 or more: beyond noise)"));
+                setText(changeText(r));
+                setTooltip(new Tooltip(r.changeFrom() + " → " + r.changeTo() + ": moved SAD " + Numbers.fmt(locale,
+                        r.change().sad(), 2) + " somatotype units; the change is " + r.change().multipleText(locale)
+                        + " times the noise limit (1.00 or more: beyond noise)"));
                 getStyleClass().add(switch (r.verdict()) {
                     case BEYOND_NOISE -> "beyond";
                     case BORDERLINE -> "borderline";
@@ -49,11 +70,11 @@ final class PeopleTable {
                 });
             }
         });
-        change.setPrefWidth(130);
-        t.getColumns().add(change);
-        TableColumn<PersonRow, PersonRow> growth = new TableColumn<>("Growth cm/y");
-        growth.setCellValueFactory(d -> new SimpleObjectProperty<>(d.getValue()));
-        growth.setComparator(Comparator.comparingDouble(r -> Double.isNaN(r.velocity()) ? -99 : r.velocity()));
+        fitted.add(new Fitted(change, this::changeText, changeHeader));
+        changeHeader.setTooltip(new Tooltip(changeTip()));
+        change.setGraphic(changeHeader);
+        table.getColumns().add(change);
+        TableColumn<PersonRow, PersonRow> growth = custom(PersonRow::velocity, this::growthText, true);
         growth.setCellFactory(c -> new TableCell<>() {
             @Override
             protected void updateItem(PersonRow r, boolean empty) {
@@ -63,37 +84,106 @@ final class PeopleTable {
                     setText(null);
                     return;
                 }
-                setText(Numbers.fmt(locale, r.velocity(), 1) + (r.rapidGrowth() ? "  ▲ rapid" : ""));
+                setText(growthText(r));
                 if (r.rapidGrowth()) {
                     getStyleClass().add("alert");
                 }
             }
         });
-        growth.setPrefWidth(95);
-        t.getColumns().add(growth);
-        t.getColumns().add(text("Maturity", r -> r.maturity() == null ? "" : r.maturity().words(), 80));
-        return t;
+        add(growth, this::growthText, "Growth cm/y", "Stature velocity at the latest visit, cm a year; with its error"
+                + " (±) when it rests on less than six months. ▲ rapid: above the alert threshold over six months or"
+                + " more.");
+        add(text("Maturity", r -> r.maturity() == null ? "" : r.maturity().words()),
+                r -> r.maturity() == null ? "" : r.maturity().words(), "Maturity",
+                "Maturity status from the estimated maturity offset (about ±0.6 years of error).");
+        rows.addListener((javafx.collections.ListChangeListener<PersonRow>) c -> fitWidths());
+        fitWidths();
     }
 
-    private static TableColumn<PersonRow, String> text(String name, Function<PersonRow, String> f, double w) {
-        TableColumn<PersonRow, String> c = new TableColumn<>(name);
+    private String changeText(PersonRow r) {
+        return r.change() == null ? "" : PersonPage.cell(r.change(), locale);
+    }
+
+    private String growthText(PersonRow r) {
+        if (Double.isNaN(r.velocity())) {
+            return "";
+        }
+        return Numbers.fmt(locale, r.velocity(), 1) + (r.shortInterval() ? " ± " + Numbers.fmt(locale, r.velocitySe(), 1)
+                : "") + (r.rapidGrowth() ? "  ▲ rapid" : "");
+    }
+
+    private static String changeTip() {
+        return "The noise multiple of the change over the period and the verdict it reads as: 1.00 or more is beyond"
+                + " noise, 0.77 to 0.99 borderline. Hover a cell for the dates and the distance moved (SAD, in"
+                + " somatotype units, the same units as the ratings). The first click sorts the largest first.";
+    }
+
+    TableView<PersonRow> table() {
+        return table;
+    }
+
+    /** Names the period in the change column's header. */
+    void setPeriod(Period p) {
+        changeHeader.setText(p.header(locale));
+        fitWidths();
+    }
+
+    private static TableColumn<PersonRow, String> text(String name, Function<PersonRow, String> f) {
+        TableColumn<PersonRow, String> c = new TableColumn<>();
         c.setCellValueFactory(d -> new SimpleObjectProperty<>(f.apply(d.getValue())));
-        c.setPrefWidth(w);
         return c;
     }
 
-    private static TableColumn<PersonRow, Double> number(String name, Function<PersonRow, Double> f, int decimals,
-                                                         Locale locale, double w) {
-        TableColumn<PersonRow, Double> c = new TableColumn<>(name);
-        c.setCellValueFactory(d -> new SimpleObjectProperty<>(f.apply(d.getValue())));
+    /** A column holding the row, sorted by {@code key} (largest first on the first click when {@code descending}). */
+    private static TableColumn<PersonRow, PersonRow> custom(Function<PersonRow, Double> key,
+                                                           Function<PersonRow, String> text, boolean descending) {
+        TableColumn<PersonRow, PersonRow> c = new TableColumn<>();
+        c.setCellValueFactory(d -> new SimpleObjectProperty<>(d.getValue()));
+        c.setComparator(Comparator.comparingDouble(r -> {
+            double v = key.apply(r);
+            return Double.isNaN(v) ? Double.NEGATIVE_INFINITY : v;
+        }));
+        if (descending) {
+            c.setSortType(TableColumn.SortType.DESCENDING);
+        }
         c.setCellFactory(col -> new TableCell<>() {
             @Override
-            protected void updateItem(Double v, boolean empty) {
-                super.updateItem(v, empty);
-                setText(empty || v == null ? null : Numbers.fmt(locale, v, decimals));
+            protected void updateItem(PersonRow r, boolean empty) {
+                super.updateItem(r, empty);
+                setText(empty || r == null ? null : text.apply(r));
             }
         });
-        c.setPrefWidth(w);
         return c;
+    }
+
+    private void add(TableColumn<PersonRow, ?> c, Function<PersonRow, String> text, String header, String tip) {
+        Label h = new Label(header);
+        h.setTooltip(new Tooltip(tip));
+        c.setGraphic(h);
+        fitted.add(new Fitted(c, text, h));
+        table.getColumns().add(c);
+    }
+
+    /** Every column as wide as its widest text (header or cell), plus the cell's padding and the sort arrow. */
+    private void fitWidths() {
+        // the stylesheet's 13 px, bold as verdict and alert cells are: the widest a text is drawn
+        Font font = Font.font(Font.getDefault().getFamily(), javafx.scene.text.FontWeight.BOLD, 13);
+        for (Fitted f : fitted) {
+            double w = width(f.header().getText(), font) + 28; // header padding and room for the sort arrow
+            for (PersonRow r : table.getItems()) {
+                w = Math.max(w, width(f.text().apply(r), font) + 16);
+            }
+            f.column().setPrefWidth(Math.ceil(w));
+            f.column().setMinWidth(Math.ceil(w));
+        }
+    }
+
+    private static double width(String s, Font font) {
+        if (s == null || s.isEmpty()) {
+            return 0;
+        }
+        Text t = new Text(s);
+        t.setFont(font);
+        return t.getLayoutBounds().getWidth();
     }
 }

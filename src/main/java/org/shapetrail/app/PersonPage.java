@@ -31,9 +31,17 @@ public record PersonPage(String title, List<String> profile, String latestChange
                 squad.isEmpty() ? "no current squad" : squad, "born " + p.birthDate().format(dates))));
         GrowthSummary g = h.growth();
         boolean adult = h.latest().map(v -> v.ageYears() >= 18).orElse(false);
-        g.velocity().filter(v -> !adult).ifPresent(v -> profile.add("Stature velocity " + Numbers.fmt(locale, v.perYear(), 1) + " ± "
-                + Numbers.fmt(locale, v.sePerYear(), 1) + " cm/year over " + Numbers.fmt(locale, v.intervalYears(), 2)
-                + " years" + (g.rapidGrowth() ? " — RAPID GROWTH. " + GrowthAlert.CAUTION : "")));
+        g.velocity().filter(v -> !adult).ifPresent(v -> {
+            String line = "Stature velocity " + velocity(v, locale);
+            if (v.shortInterval()) {
+                line += " — from less than six months, so its error is wide and it never raises the rapid-growth"
+                        + " alert alone (common practice: velocities are read over six months or more)"
+                        + g.longerVelocity().map(l -> "; over the last " + Numbers.fmt(locale, l.intervalYears(), 2)
+                        + " years: " + velocity(l, locale)).orElse("");
+            }
+            profile.add(line + (g.rapidGrowth() ? " — RAPID GROWTH (over six months or more). " + GrowthAlert.CAUTION
+                    : ""));
+        });
         if (!adult && !g.otherVelocities().isEmpty()) {
             List<String> parts = new ArrayList<>();
             g.otherVelocities().forEach((what, v) -> parts.add(what + " " + Numbers.fmt(locale, v.perYear(), 1) + " ± "
@@ -45,7 +53,8 @@ public record PersonPage(String title, List<String> profile, String latestChange
             profile.add("Maturity: " + m.summary() + ". " + MaturityEstimate.CAUTION);
         }
         if (!adult) {
-            profile.add("Observed growth spurt: " + g.observedPhv().describe());
+            profile.add("Observed growth spurt: " + g.observedPhv().describe()
+                    + g.spurtDisagreement().map(s -> ". " + s).orElse(""));
         }
         if (g.midParentTargetCm() != null) {
             profile.add("Mid-parent target height " + Numbers.fmt(locale, g.midParentTargetCm(), 1) + " cm; "
@@ -75,6 +84,12 @@ public record PersonPage(String title, List<String> profile, String latestChange
                     change.map(c -> cell(c.verdict(), locale)).orElse("")));
         }
         return new PersonPage(p.displayName(), profile, latest, lines, Charts.migration(h, true, locale, false));
+    }
+
+    /** E.g. "6.1 ± 1.4 cm/year over 0.30 years". */
+    static String velocity(org.shapetrail.growth.Velocity v, Locale locale) {
+        return Numbers.fmt(locale, v.perYear(), 1) + " ± " + Numbers.fmt(locale, v.sePerYear(), 1) + " cm/year over "
+                + Numbers.fmt(locale, v.intervalYears(), 2) + " years";
     }
 
     /**

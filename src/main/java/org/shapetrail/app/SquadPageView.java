@@ -28,13 +28,15 @@ final class SquadPageView {
     private final Label summary = new Label();
     private final VBox blocks = new VBox(2);
     private final TableView<PersonRow> members;
+    private final javafx.collections.ObservableList<PersonRow> memberRows = javafx.collections.FXCollections
+            .observableArrayList();
     private final ChartCanvas chart = new ChartCanvas();
     private final BorderPane root = new BorderPane();
     private boolean stale = true;
 
     SquadPageView(WorkbenchContext ctx) {
         this.ctx = ctx;
-        members = PeopleTable.create("squad-members", ctx.locale, true);
+        members = new PeopleTable("squad-members", ctx.locale, true, memberRows).table();
         squadChoice.setId("squad-choice");
         squadChoice.valueProperty().addListener((o, a, b) -> show());
         summary.setId("squad-summary");
@@ -96,7 +98,7 @@ final class SquadPageView {
         chosen().ifPresent(s -> {
             SquadPage page = SquadPage.of(ctx.loaded(), s, LocalDate.now(), ctx.locale);
             summary.setText(page.summary());
-            members.getItems().setAll(page.members());
+            memberRows.setAll(page.members());
             blocks.getChildren().setAll(page.blocks().isEmpty() ? List.of(new Label("none"))
                     : page.blocks().stream().map(Label::new).toList());
             chart.setModel(page.chart());

@@ -44,7 +44,12 @@ public final class VisitEntryView {
         this.vm = vm;
         stage.initOwner(owner);
         stage.initModality(Modality.WINDOW_MODAL);
-        stage.setTitle((vm.isEdit() ? "Edit visit — " : "New visit — ") + vm.person().displayName());
+        stage.setTitle((vm.isEdit() ? "Edit visit — " : "New visit — ") + vm.heading());
+        Label who = new Label((vm.isEdit() ? "Editing a visit of " : "New visit for ") + vm.heading());
+        who.setId("visit-person");
+        who.getStyleClass().add("page-title");
+        vm.dateProperty().addListener((o, a, b) -> who.setText((vm.isEdit() ? "Editing a visit of "
+                : "New visit for ") + vm.heading()));
 
         DatePicker date = new DatePicker();
         date.setId("visit-date");
@@ -71,6 +76,18 @@ public final class VisitEntryView {
         context.textProperty().bindBidirectional(vm.contextProperty());
         HBox head = new HBox(8, new Label("Date"), date, new Label("Measured by"), measurer, new Label("Context"),
                 context);
+        head.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+        javafx.scene.control.CheckBox confirm = new javafx.scene.control.CheckBox();
+        confirm.setId("confirm-date");
+        confirm.textProperty().bind(vm.dateQuestionProperty().concat("  Yes, the date and the person are right."));
+        confirm.selectedProperty().bindBidirectional(vm.dateConfirmedProperty());
+        confirm.visibleProperty().bind(vm.dateQuestionProperty().isNotEmpty());
+        confirm.managedProperty().bind(confirm.visibleProperty());
+        confirm.getStyleClass().add("alert-line");
+        confirm.setWrapText(true);
+        // the date comes first: Enter on it moves on to who measured, then the context, then the first trial
+        date.setOnAction(e -> measurer.requestFocus());
+        measurer.setOnAction(e -> context.requestFocus());
 
         GridPane grid = new GridPane();
         grid.setHgap(8);
@@ -151,7 +168,8 @@ public final class VisitEntryView {
         hint.getStyleClass().add("hint");
         HBox buttons = new HBox(8, save, cancel, hint);
 
-        VBox body = new VBox(10, head, grid, raterBox, live, verdict, new Label("To put right before saving:"),
+        context.setOnAction(e -> order.get(0).requestFocus());
+        VBox body = new VBox(10, who, head, confirm, grid, raterBox, live, verdict, new Label("To put right before saving:"),
                 problems, buttons);
         body.setPadding(new Insets(12));
         ScrollPane scroll = new ScrollPane(body);
@@ -164,7 +182,8 @@ public final class VisitEntryView {
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.S, KeyCombination.SHORTCUT_DOWN), this::save);
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.ESCAPE), stage::close);
         stage.setScene(scene);
-        stage.setOnShown(e -> order.get(0).requestFocus());
+        // a new visit starts at its date, so it is looked at before anything is typed; an edit at its first trial
+        stage.setOnShown(e -> (vm.isEdit() ? order.get(0) : date).requestFocus());
     }
 
     private static Label header(String s) {

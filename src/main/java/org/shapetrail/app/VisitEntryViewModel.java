@@ -110,6 +110,11 @@ public final class VisitEntryViewModel {
     private final BooleanProperty canSave = new SimpleBooleanProperty(false);
     private final BooleanProperty saving = new SimpleBooleanProperty(false);
     private final ObservableList<Measurer> measurers = FXCollections.observableArrayList();
+    /** Set by the person after reading why today's date needs a second look ({@link #dateQuestion()}). */
+    private final BooleanProperty dateConfirmed = new SimpleBooleanProperty(false);
+    private final StringProperty dateQuestion = new SimpleStringProperty("");
+    /** Days since the last visit under which a new visit today must be confirmed (four weeks; the rule). */
+    public static final int CONFIRM_WITHIN_DAYS = 28;
 
     /**
      * @param editing the visit being edited, or null for a new one
@@ -132,7 +137,11 @@ public final class VisitEntryViewModel {
             f.second.addListener(o -> evaluate());
             f.third.addListener(o -> evaluate());
         }
-        date.addListener(o -> evaluate());
+        date.addListener(o -> {
+            dateConfirmed.set(false);
+            evaluate();
+        });
+        dateConfirmed.addListener(o -> evaluate());
         measurer.addListener(o -> evaluate());
         context.addListener(o -> evaluate());
         for (StringProperty p : List.of(raterEndo, raterMeso, raterEcto, raterName)) {
@@ -222,6 +231,10 @@ public final class VisitEntryViewModel {
             found.add(new Problem(null, ProblemKind.MISSING, "Enter the date of the visit."));
         } else {
             org.shapetrail.measure.VisitDate.check(person.birthDate(), date.get(), LocalDate.now()).ifPresent(found::add);
+        }
+        dateQuestion.set(dateQuestionNow());
+        if (!dateQuestion.get().isEmpty() && !dateConfirmed.get()) {
+            found.add(new Problem(null, ProblemKind.INCONSISTENT, "Confirm the date: " + dateQuestion.get()));
         }
         org.shapetrail.store.TextRules.problem(org.shapetrail.store.TextRules.Field.CONTEXT, context.get())
                 .ifPresent(w -> found.add(new Problem(null, ProblemKind.UNUSABLE_TEXT,
@@ -351,6 +364,49 @@ public final class VisitEntryViewModel {
     }
 
     /** True while a save is being written (the view takes input away meanwhile). */
+    /**
+     * Why a new visit dated today needs a second look — the person already has a visit today, or was last
+     * measured less than four weeks ago (so the visit may be going into the wrong record) — or "".
+     */
+    private String dateQuestionNow() {
+        LocalDate d = date.get();
+        if (editing != null || d == null || !d.equals(LocalDate.now())) {
+            return "";
+        }
+        var before = history.visits().stream().map(v -> v.visit().measuredAt().toLocalDate()).filter(x -> !x.isAfter(d))
+                .max(LocalDate::compareTo);
+        if (before.isEmpty()) {
+            return "";
+        }
+        long days = java.time.temporal.ChronoUnit.DAYS.between(before.get(), d);
+        if (days == 0) {
+            return person.displayName() + " already has a visit today. Is this another one?";
+        }
+        if (days < CONFIRM_WITHIN_DAYS) {
+            return person.displayName() + " was last measured " + days + " day" + (days == 1 ? "" : "s") + " ago ("
+                    + before.get() + "). Is this visit really theirs, today?";
+        }
+        return "";
+    }
+
+    /** The question the date raises, or "" (shown with a tick box beside the date). */
+    public StringProperty dateQuestionProperty() {
+        return dateQuestion;
+    }
+
+    public BooleanProperty dateConfirmedProperty() {
+        return dateConfirmed;
+    }
+
+    /** Who this visit is for, e.g. "Freya Breakwater · 22.5 years · Senior squad". */
+    public String heading() {
+        LocalDate d = date.get() == null ? LocalDate.now() : date.get();
+        String age = d.isBefore(person.birthDate()) ? "" : " · " + Numbers.fmt(locale,
+                org.shapetrail.growth.DecimalAge.years(person.birthDate(), d), 1) + " years";
+        String squad = WorkbenchViewModel.currentSquad(builder.academy(), person.id());
+        return person.displayName() + age + " · " + (squad.isEmpty() ? "no current squad" : squad);
+    }
+
     public BooleanProperty savingProperty() {
         return saving;
     }

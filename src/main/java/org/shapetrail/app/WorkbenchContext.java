@@ -62,8 +62,12 @@ final class WorkbenchContext {
         d.showAndWait().ifPresent(name -> organise(() -> change.apply(l.file(), name)));
     }
 
-    /** Makes a change off the FX thread; a refusal goes to the error line, success reloads the file. */
-    void organise(Supplier<Optional<String>> change) {
+    /**
+     * Makes a change off the FX thread; a refusal goes to the error line, success reloads the file.
+     *
+     * @return true when the change was made
+     */
+    boolean organise(Supplier<Optional<String>> change) {
         Optional<String> refused;
         try {
             refused = OffFxThread.call(storing, change::get);
@@ -72,10 +76,11 @@ final class WorkbenchContext {
         }
         if (refused.isPresent()) {
             vm.errorProperty().set(refused.get());
-        } else {
-            vm.errorProperty().set("");
-            vm.reload();
+            return false;
         }
+        vm.errorProperty().set("");
+        vm.reload();
+        return true;
     }
 
     /** The form for a new person (null) or for editing one. */

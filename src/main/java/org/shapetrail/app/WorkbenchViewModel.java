@@ -45,6 +45,7 @@ public final class WorkbenchViewModel {
     private final ObjectProperty<AgeBand> ageBand = new SimpleObjectProperty<>(AgeBand.ALL);
     private final ObjectProperty<MaturityStatus> maturity = new SimpleObjectProperty<>();
     private final BooleanProperty rapidOnly = new SimpleBooleanProperty(false);
+    private final ObjectProperty<Period> period = new SimpleObjectProperty<>(Period.LATEST);
     private final ObjectProperty<PersonRow> selected = new SimpleObjectProperty<>();
     private final StringProperty status = new SimpleStringProperty("");
     private final StringProperty error = new SimpleStringProperty("");
@@ -57,6 +58,7 @@ public final class WorkbenchViewModel {
         ageBand.addListener(o -> applyFilter());
         maturity.addListener(o -> applyFilter());
         rapidOnly.addListener(o -> applyFilter());
+        period.addListener(o -> fillRows());
     }
 
     /** Opens a file in the background, replacing the current one when done. */
@@ -134,7 +136,6 @@ public final class WorkbenchViewModel {
     }
 
     void show(Loaded l) {
-        Long keep = selected.get() == null ? null : selected.get().id();
         loaded.set(l);
         Academy a = l.builder().academy();
         List<String> names = new ArrayList<>();
@@ -144,32 +145,72 @@ public final class WorkbenchViewModel {
         if (!names.contains(squad.get())) {
             squad.set(ALL_SQUADS);
         }
+        fillRows();
+        status.set(l.file().getFileName() + ": " + a.people().size() + " people, " + a.visits().size() + " visits");
+    }
+
+    /** Every person's line for the period chosen, filtered; the selection is kept. */
+    private void fillRows() {
+        Loaded l = loaded.get();
+        if (l == null) {
+            return;
+        }
+        Long keep = selected.get() == null ? null : selected.get().id();
+        Academy a = l.builder().academy();
         List<PersonRow> list = new ArrayList<>();
         for (Person p : a.people()) {
-            list.add(row(a, l.histories().get(p.id())));
+            list.add(row(a, l.histories().get(p.id()), l.builder(), period.get()));
         }
         allRows.setAll(list);
         applyFilter();
-        status.set(l.file().getFileName() + ": " + a.people().size() + " people, " + a.visits().size() + " visits");
+        if (keep != null) {
+            rows.stream().filter(r -> r.id() == keep).findFirst().ifPresent(selected::set);
+        }
         if (keep != null) {
             rows.stream().filter(r -> r.id() == keep).findFirst().ifPresent(selected::set);
         }
     }
 
     static PersonRow row(Academy a, PersonHistory h) {
+        return row(a, h, null, Period.LATEST);
+    }
+
+    /**
+     * A person's line for the period: the latest change, or the change from their first rated visit on or
+     * after the period's first day to their last on or before its last day ({@code b} judges it).
+     */
+    static PersonRow row(Academy a, PersonHistory h, HistoryBuilder b, Period period) {
         Person p = h.person();
         String squadName = currentSquad(a, p.id());
         var last = h.latest();
         var rated = h.rated();
         var lastRated = rated.isEmpty() ? null : rated.get(rated.size() - 1);
-        var change = h.latestChange();
+        org.shapetrail.noise.ChangeVerdict change = null;
+        LocalDate from = null;
+        LocalDate to = null;
+        if (period.kind() == Period.Kind.LATEST) {
+            var c = h.latestChange();
+            if (c.isPresent()) {
+                change = c.get().verdict();
+                from = c.get().from().visit().measuredAt().toLocalDate();
+                to = c.get().to().visit().measuredAt().toLocalDate();
+            }
+        } else {
+            var in = rated.stream().filter(r -> !r.visit().measuredAt().toLocalDate().isBefore(period.from())
+                    && !r.visit().measuredAt().toLocalDate().isAfter(period.to())).toList();
+            if (in.size() >= 2) {
+                change = b.verdict(in.get(0), in.get(in.size() - 1));
+                from = in.get(0).visit().measuredAt().toLocalDate();
+                to = in.get(in.size() - 1).visit().measuredAt().toLocalDate();
+            }
+        }
         var g = h.growth();
         return new PersonRow(p.id(), p.displayName(), squadName, last.map(v -> v.ageYears()).orElse(Double.NaN),
                 lastRated == null ? "" : lastRated.somatotype().rating().toDisplayString(),
-                lastRated == null ? "" : lastRated.somatotype().category().displayName(),
-                change.map(c -> c.verdict().sad()).orElse(Double.NaN),
-                change.map(c -> c.verdict().shownMultiple()).orElse(Double.NaN), change.map(c -> c.verdict().verdict()).orElse(null),
-                g.velocity().map(v -> v.perYear()).orElse(Double.NaN), g.rapidGrowth(),
+                lastRated == null ? "" : lastRated.somatotype().category().displayName(), change, from, to,
+                g.velocity().map(v -> v.perYear()).orElse(Double.NaN),
+                g.velocity().map(v -> v.sePerYear()).orElse(Double.NaN),
+                g.velocity().map(v -> v.shortInterval()).orElse(false), g.rapidGrowth(),
                 g.maturityEstimate().map(m -> m.status()).orElse(null));
     }
 
@@ -253,6 +294,11 @@ public final class WorkbenchViewModel {
 
     public ObjectProperty<MaturityStatus> maturityProperty() {
         return maturity;
+    }
+
+    /** The span the change column covers (the latest change by default). */
+    public ObjectProperty<Period> periodProperty() {
+        return period;
     }
 
     public BooleanProperty rapidOnlyProperty() {

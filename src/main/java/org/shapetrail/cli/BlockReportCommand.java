@@ -48,10 +48,7 @@ final class BlockReportCommand implements Callable<Integer> {
             if (blocks.isEmpty()) {
                 throw new StoreException("This file has no training blocks.");
             }
-            TrainingBlock b = blockName == null ? blocks.get(blocks.size() - 1) : blocks.stream()
-                    .filter(x -> x.name().equalsIgnoreCase(blockName.strip())).findFirst()
-                    .orElseThrow(() -> new StoreException("There is no block called \"" + blockName + "\"; the blocks"
-                            + " are: " + String.join(", ", blocks.stream().map(TrainingBlock::name).toList())));
+            TrainingBlock b = blockName == null ? blocks.get(blocks.size() - 1) : BlockCommand.named(d, blockName);
             r = BlockReview.of(HistoryBuilder.of(a, AnalysisSettings.standard()), b, window);
             squad = a.squad(b.squadId()).map(s -> s.name()).orElse("");
         }
@@ -66,7 +63,8 @@ final class BlockReportCommand implements Callable<Integer> {
         }
         if (output.format == OutputFormat.TEXT) {
             out.println(r.block().name() + " (" + squad + "), " + r.block().startsOn() + " to " + r.block().endsOn()
-                    + "; visits within " + window + " days of the start and the end");
+                    + "; each member's chosen visits, or the latest rated visit in the " + window + " days up to the"
+                    + " start and the earliest in the " + window + " days from the end");
             out.println();
         }
         athletes.write(out, output.format);

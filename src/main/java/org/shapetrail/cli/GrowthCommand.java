@@ -50,13 +50,13 @@ final class GrowthCommand implements Callable<Integer> {
             histories.addAll(who.histories(a, b, java.time.LocalDate.now()));
         }
         Table t = new Table("id", "name", "age", "stature_cm", "velocity_cm_per_year", "velocity_se", "interval_years",
-                "rapid_growth", "maturity_status", "maturity_offset_years", "estimated_age_at_phv", "see_years",
+                "velocity_6_months_cm_per_year", "velocity_6_months_interval_years", "rapid_growth", "maturity_status", "maturity_offset_years", "estimated_age_at_phv", "see_years",
                 "method", "observed_phv", "mid_parent_target_cm", "percent_of_target", "predicted_adult_cm",
                 "percent_of_predicted", "bio_band", "sitting_height_cm_per_year", "leg_length_cm_per_year",
                 "mass_kg_per_year");
         for (PersonHistory h : histories) {
             if (h.visits().isEmpty()) {
-                t.row(h.person().id(), h.person().displayName(), "", "", "", "", "", "", "", "", "", "", "",
+                t.row(h.person().id(), h.person().displayName(), "", "", "", "", "", "", "", "", "", "", "", "", "",
                         "no visits", "", "", "", "", "", "", "", "");
                 continue;
             }
@@ -67,7 +67,10 @@ final class GrowthCommand implements Callable<Integer> {
             t.row(h.person().id(), h.person().displayName(), Table.num(last.ageYears(), 1),
                     last.value(Site.STATURE).map(x -> Table.num(x, 1)).orElse(""),
                     v == null ? "" : Table.num(v.perYear(), 1), v == null ? "" : Table.num(v.sePerYear(), 1),
-                    v == null ? "" : Table.num(v.intervalYears(), 2), g.rapidGrowth() ? "yes" : "no",
+                    v == null ? "" : Table.num(v.intervalYears(), 2),
+                    g.alertVelocity() == null ? "" : Table.num(g.alertVelocity().perYear(), 1),
+                    g.alertVelocity() == null ? "" : Table.num(g.alertVelocity().intervalYears(), 2),
+                    g.rapidGrowth() ? "yes" : "no",
                     m == null ? "" : m.status().words(), m == null ? "" : Table.num(m.offsetYears(), 2),
                     m == null ? "" : Table.num(m.ageAtPhv(), 1), m == null ? "" : Table.num(m.seeYears(), 2),
                     m == null ? "" : m.method().citation(), g.observedPhv().describe(),

@@ -20,8 +20,11 @@ public record GrowthAlert(double thresholdCmPerYear) {
         return new GrowthAlert(DEFAULT_CM_PER_YEAR);
     }
 
-    /** True when this velocity (readable, i.e. over a long enough interval) is above the threshold. */
+    /**
+     * True when this velocity is above the threshold and rests on at least {@link Velocity#ALERT_MIN_DAYS}
+     * days: a velocity from a shorter interval never raises the alert alone.
+     */
     public boolean raisedBy(Velocity statureVelocity) {
-        return !statureVelocity.tooShortToRead() && statureVelocity.perYear() > thresholdCmPerYear;
+        return !statureVelocity.shortInterval() && statureVelocity.perYear() > thresholdCmPerYear;
     }
 }

@@ -13,6 +13,19 @@ package org.shapetrail.growth;
 public record Velocity(double perYear, double sePerYear, double intervalYears, boolean tooShortToRead) {
     /** Intervals shorter than this (about three months; common practice) are flagged. */
     public static final int MIN_READABLE_DAYS = 90;
+    /**
+     * Intervals from which a velocity may raise the rapid-growth alert: about six months. Growth velocity is
+     * usually annualised over six months or more (common practice in growth monitoring, from memory: the
+     * growth standards are built on yearly increments), because over a shorter interval the two
+     * measurements' errors are multiplied by a large annualising factor and seasonal variation in growth
+     * rate weighs more.
+     */
+    public static final int ALERT_MIN_DAYS = 182;
+
+    /** True when the interval is under {@link #ALERT_MIN_DAYS}: the velocity's error is wide. */
+    public boolean shortInterval() {
+        return intervalYears * 365.25 < ALERT_MIN_DAYS - 0.5;
+    }
 
     /**
      * The velocity between two values.

@@ -12,12 +12,14 @@ import org.shapetrail.growth.Velocity;
  *     three months earlier (null with fewer than two such visits)
  * @param maturity maturity offset at the latest visit (null for adults or without the needed sites)
  * @param phvFit the person's own peak, or why there is none, fitted when first asked for ({@link #observedPhv()})
+ * @param alertVelocity stature velocity from the latest visit back to the most recent one at least six
+ *     months earlier ({@link Velocity#ALERT_MIN_DAYS}), the one the alert reads; null without such a visit
  * @param midParentTargetCm mid-parent target height, or null without both parents' statures
- * @param rapidGrowth true when the latest velocity is above the alert threshold
+ * @param rapidGrowth true when the alert velocity is above the alert threshold
  * @param predictedAdultCm predicted adult stature entered by the user, or null
  * @param percentOfPredicted latest stature as percent of it, or null
  */
-public record GrowthSummary(Velocity latestVelocity, MaturityEstimate maturity, PhvFit phvFit,
+public record GrowthSummary(Velocity latestVelocity, Velocity alertVelocity, MaturityEstimate maturity, PhvFit phvFit,
                             Double midParentTargetCm, Double percentOfTarget, boolean rapidGrowth,
                             Double predictedAdultCm, Double percentOfPredicted,
                             java.util.Map<String, Velocity> otherVelocities) {
@@ -60,6 +62,36 @@ public record GrowthSummary(Velocity latestVelocity, MaturityEstimate maturity, 
 
     public Optional<Velocity> velocity() {
         return Optional.ofNullable(latestVelocity);
+    }
+
+    /** The velocity over at least six months, when the latest one is over less and the longer one exists. */
+    public Optional<Velocity> longerVelocity() {
+        return latestVelocity != null && latestVelocity.shortInterval() ? Optional.ofNullable(alertVelocity)
+                : Optional.empty();
+    }
+
+    /** Years by which an observed spurt and an estimated age at PHV may differ before that is explained. */
+    public static final double SPURT_DISAGREEMENT_YEARS = 1.0;
+
+    /**
+     * One sentence when the spurt seen in the person's own statures and the age at PHV estimated from body
+     * proportions differ by more than a year: why they can, and which to trust.
+     */
+    public Optional<String> spurtDisagreement() {
+        if (maturity == null) {
+            return Optional.empty();
+        }
+        ObservedPhv.Result seen = observedPhv();
+        if (seen.status() != ObservedPhv.Status.FOUND
+                || Math.abs(seen.ageAtPeak() - maturity.ageAtPhv()) <= SPURT_DISAGREEMENT_YEARS) {
+            return Optional.empty();
+        }
+        return Optional.of(String.format(java.util.Locale.ROOT, "The spurt seen in the measurements (at %.1f years)"
+                + " and the estimate from body proportions (%.1f years) differ by %.1f years: the estimate comes from"
+                + " one visit, carries about ±0.6 years of error and is pulled towards the average age, so it is"
+                + " often late for early maturers and early for late ones; once the spurt is in the measurements, it"
+                + " is the better guide.", seen.ageAtPeak(), maturity.ageAtPhv(),
+                Math.abs(seen.ageAtPeak() - maturity.ageAtPhv())));
     }
 
     public Optional<MaturityEstimate> maturityEstimate() {

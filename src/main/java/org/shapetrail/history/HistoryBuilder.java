@@ -111,21 +111,8 @@ public final class HistoryBuilder {
 
     private GrowthSummary growth(Person p, List<VisitResult> results) {
         List<VisitResult> withStature = results.stream().filter(r -> r.value(Site.STATURE).isPresent()).toList();
-        Velocity velocity = null;
-        if (!withStature.isEmpty()) {
-            VisitResult last = withStature.get(withStature.size() - 1);
-            for (int i = withStature.size() - 2; i >= 0; i--) {
-                VisitResult earlier = withStature.get(i);
-                long days = ChronoUnit.DAYS.between(earlier.visit().measuredAt().toLocalDate(),
-                        last.visit().measuredAt().toLocalDate());
-                if (days >= Velocity.MIN_READABLE_DAYS) {
-                    velocity = Velocity.between(earlier.finalValues().get(Site.STATURE),
-                            earlier.standardErrors().get(Site.STATURE), last.finalValues().get(Site.STATURE),
-                            last.standardErrors().get(Site.STATURE), days);
-                    break;
-                }
-            }
-        }
+        Velocity velocity = statureVelocity(withStature, Velocity.MIN_READABLE_DAYS);
+        Velocity alertVelocity = statureVelocity(withStature, Velocity.ALERT_MIN_DAYS);
         MaturityEstimate maturity = null;
         Double target = null;
         Double percent = null;
@@ -157,10 +144,28 @@ public final class HistoryBuilder {
             points.add(new ObservedPhv.Point(r.ageYears(), r.finalValues().get(Site.STATURE)));
         }
         GrowthSummary.PhvFit phv = new GrowthSummary.PhvFit(points);
-        boolean rapid = velocity != null && last(results).ageYears() < MAX_MATURITY_AGE
-                && settings.alert().raisedBy(velocity);
-        return new GrowthSummary(velocity, maturity, phv, target, percent, rapid, p.predictedAdultStatureCm(),
+        boolean rapid = alertVelocity != null && last(results).ageYears() < MAX_MATURITY_AGE
+                && settings.alert().raisedBy(alertVelocity);
+        return new GrowthSummary(velocity, alertVelocity, maturity, phv, target, percent, rapid, p.predictedAdultStatureCm(),
                 predictedPercent, otherVelocities(results));
+    }
+
+    /** Stature velocity from the latest visit back to the most recent one at least {@code minDays} earlier, or null. */
+    private static Velocity statureVelocity(List<VisitResult> withStature, int minDays) {
+        if (withStature.isEmpty()) {
+            return null;
+        }
+        VisitResult last = withStature.get(withStature.size() - 1);
+        for (int i = withStature.size() - 2; i >= 0; i--) {
+            VisitResult earlier = withStature.get(i);
+            long days = ChronoUnit.DAYS.between(earlier.visit().measuredAt().toLocalDate(),
+                    last.visit().measuredAt().toLocalDate());
+            if (days >= minDays) {
+                return Velocity.between(earlier.finalValues().get(Site.STATURE), earlier.standardErrors().get(Site.STATURE),
+                        last.finalValues().get(Site.STATURE), last.standardErrors().get(Site.STATURE), days);
+            }
+        }
+        return null;
     }
 
     /**

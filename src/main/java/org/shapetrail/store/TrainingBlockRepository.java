@@ -112,6 +112,20 @@ public final class TrainingBlockRepository {
             }
         }
         for (Map.Entry<Long, TrainingBlock.Pick> e : b.picks().entrySet()) {
+            try (PreparedStatement ps = c.prepareStatement("SELECT count(*) FROM membership WHERE person_id = ? AND"
+                    + " squad_id = ? AND joined_on <= ? AND (left_on IS NULL OR left_on >= ?)")) {
+                ps.setLong(1, e.getKey());
+                ps.setLong(2, b.squadId());
+                ps.setString(3, b.endsOn().toString());
+                ps.setString(4, b.startsOn().toString());
+                try (ResultSet rs = ps.executeQuery()) {
+                    if (rs.next() && rs.getInt(1) == 0) {
+                        throw new StoreException("Person " + e.getKey() + " was not in the block's squad between "
+                                + b.startsOn() + " and " + b.endsOn() + ", so no visits can be chosen for them. Nothing"
+                                + " was saved.");
+                    }
+                }
+            }
             Optional<Visit> before = new VisitRepository(c).find(e.getValue().beforeVisitId());
             Optional<Visit> after = new VisitRepository(c).find(e.getValue().afterVisitId());
             if (before.isEmpty() || after.isEmpty() || before.get().personId() != e.getKey()

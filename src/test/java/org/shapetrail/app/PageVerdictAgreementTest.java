@@ -73,8 +73,8 @@ class PageVerdictAgreementTest {
                 }
                 PersonRow row = WorkbenchViewModel.row(b.academy(), h);
                 if (row.verdict() != null) {
-                    assertEquals(Verdict.ofMultiple(row.latestMultiple()), row.verdict(), p.displayName());
-                    checked += checkAll(Numbers.fmt(locale, row.latestMultiple(), 2) + "× " + row.verdict().words(),
+                    assertEquals(Verdict.ofMultiple(row.multiple()), row.verdict(), p.displayName());
+                    checked += checkAll(Numbers.fmt(locale, row.multiple(), 2) + "× " + row.verdict().words(),
                             p.displayName() + " row");
                 }
             }

@@ -161,4 +161,34 @@ class VisitEntryViewModelTest {
             assertEquals(before, ContentDigest.of(db));
         }
     }
+
+    @Test
+    void aVisitTodaySoonAfterTheLastOneMustBeConfirmedAndTheFormNamesThePerson() throws Exception {
+        // a visit of Freya 10 days ago, so that today's new visit is less than four weeks after it (issue rule)
+        LocalDate tenDaysAgo = LocalDate.now().minusDays(10);
+        VisitEntryViewModel first = form(Locale.UK);
+        fillFull(first);
+        first.dateProperty().set(tenDaysAgo);
+        assertTrue(first.save().isPresent(), first.problems().toString());
+        try (Database db = Database.open(file)) {
+            builder = HistoryBuilder.of(Academy.load(db), AnalysisSettings.standard());
+        }
+        history = builder.history(history.person());
+        VisitEntryViewModel vm = form(Locale.UK);
+        assertTrue(vm.heading().startsWith("Freya Breakwater · "), vm.heading());
+        assertTrue(vm.heading().endsWith(" years · Senior squad"), vm.heading());
+        fillFull(vm);
+        vm.dateProperty().set(LocalDate.now());
+        assertEquals("Freya Breakwater was last measured 10 days ago (" + tenDaysAgo + "). Is this visit really theirs,"
+                + " today?", vm.dateQuestionProperty().get());
+        assertFalse(vm.canSaveProperty().get());
+        assertTrue(vm.problems().contains("Confirm the date: " + vm.dateQuestionProperty().get()), vm.problems().toString());
+        vm.dateConfirmedProperty().set(true);
+        assertTrue(vm.canSaveProperty().get(), vm.problems().toString());
+        // changing the date asks again
+        vm.dateProperty().set(LocalDate.now().minusDays(1));
+        vm.dateProperty().set(LocalDate.now());
+        assertFalse(vm.dateConfirmedProperty().get());
+        assertFalse(vm.canSaveProperty().get());
+    }
 }

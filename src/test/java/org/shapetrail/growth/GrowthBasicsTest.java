@@ -38,7 +38,18 @@ class GrowthBasicsTest {
         assertEquals(3.0 / (146 / 365.25), v.perYear(), 1e-12);
         assertEquals(Math.sqrt(0.08) / (146 / 365.25), v.sePerYear(), 1e-12);
         assertFalse(v.tooShortToRead());
-        assertTrue(GrowthAlert.standard().raisedBy(v)); // above 7 cm/year (common practice)
+        // above 7 cm/year (common practice), but over less than six months: never the alert alone
+        assertTrue(v.shortInterval());
+        assertFalse(GrowthAlert.standard().raisedBy(v));
+    }
+
+    @Test
+    void aVelocityOverSixMonthsOrMoreRaisesTheAlert() {
+        // 3.6 cm in 182 days: 3.6 / (182/365.25) = 7.22 cm/year, above 7 (derived; common practice threshold)
+        Velocity v = Velocity.between(150.0, 0.2, 153.6, 0.2, 182);
+        assertFalse(v.shortInterval());
+        assertTrue(GrowthAlert.standard().raisedBy(v));
+        assertFalse(GrowthAlert.standard().raisedBy(Velocity.between(150.0, 0.2, 153.6, 0.2, 181)));
     }
 
     @Test

@@ -1,0 +1,246 @@
+package org.shapetrail.cli;
+
+import java.io.PrintWriter;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.Squad;
+import org.shapetrail.store.StoreException;
+import org.shapetrail.store.TrainingBlock;
+import org.shapetrail.store.Visit;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code block list|new|edit|delete}: a squad's training blocks from the command line, as in the app. A
+ * member's before and after visits are the defaults (the latest rated visit up to the first day and the
+ * earliest from the last) unless chosen with {@code --pick PERSON_ID=BEFORE_DATE,AFTER_DATE}.
+ */
+@Command(name = "block", mixinStandardHelpOptions = true,
+        description = "List, create, edit or delete training blocks.",
+        subcommands = {BlockCommand.ListBlocks.class, BlockCommand.NewBlock.class, BlockCommand.EditBlock.class,
+            BlockCommand.DeleteBlock.class})
+final class BlockCommand implements Runnable {
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** The block of that name (any case), or a refusal that lists the blocks there are. */
+    static TrainingBlock named(Database d, String name) {
+        List<TrainingBlock> all = d.inTransaction(tx -> tx.blocks().all());
+        return all.stream().filter(b -> b.name().strip().equalsIgnoreCase(name.strip())).findFirst()
+                .orElseThrow(() -> new StoreException("There is no training block called \"" + name + "\"; the blocks"
+                        + " are: " + (all.isEmpty() ? "none" : String.join(", ", all.stream().map(TrainingBlock::name)
+                        .toList())) + "."));
+    }
+
+    /**
+     * Picks given as PERSON_ID=BEFORE_DATE,AFTER_DATE: each date must be a day on which the person has
+     * exactly one visit.
+     */
+    static Map<Long, TrainingBlock.Pick> picks(Database d, List<String> given) {
+        Map<Long, TrainingBlock.Pick> out = new HashMap<>();
+        for (String g : given) {
+            String[] kv = g.split("=", 2);
+            String[] days = kv.length == 2 ? kv[1].split(",", 2) : new String[0];
+            if (days.length != 2) {
+                throw new StoreException("--pick " + g + " is not PERSON_ID=BEFORE_DATE,AFTER_DATE (for example"
+                        + " 12=2025-12-30,2026-04-15).");
+            }
+            long person;
+            try {
+                person = Long.parseLong(kv[0].strip());
+            } catch (NumberFormatException e) {
+                throw new StoreException("--pick " + g + ": \"" + kv[0] + "\" is not a person id (see the people"
+                        + " command).");
+            }
+            List<Visit> visits = d.inTransaction(tx -> tx.visits().ofPerson(person));
+            out.put(person, new TrainingBlock.Pick(visitOn(visits, person, days[0], g), visitOn(visits, person, days[1], g)));
+        }
+        return out;
+    }
+
+    private static long visitOn(List<Visit> visits, long person, String dayText, String given) {
+        LocalDate day;
+        try {
+            day = LocalDate.parse(dayText.strip());
+        } catch (java.time.format.DateTimeParseException e) {
+            throw new StoreException("--pick " + given + ": \"" + dayText + "\" is not a date (use 2025-12-30).");
+        }
+        List<Visit> on = visits.stream().filter(v -> v.measuredAt().toLocalDate().equals(day)).toList();
+        if (on.size() != 1) {
+            throw new StoreException("--pick " + given + ": person " + person + " has " + (on.isEmpty() ? "no visit"
+                    : on.size() + " visits") + " on " + day + "; name a day with exactly one of their visits.");
+        }
+        return on.get(0).id();
+    }
+
+    @Command(name = "list", mixinStandardHelpOptions = true, description = "List the training blocks.")
+    static final class ListBlocks implements Callable<Integer> {
+        @Mixin
+        DbOption db;
+
+        @Mixin
+        FormatOption output;
+
+        @Spec
+        picocli.CommandLine.Model.CommandSpec spec;
+
+        @Override
+        public Integer call() {
+            Table t = new Table("id", "name", "squad", "starts_on", "ends_on", "chosen_visits", "aim");
+            try (Database d = db.open()) {
+                List<Squad> squads = d.inTransaction(tx -> tx.squads().all());
+                for (TrainingBlock b : d.inTransaction(tx -> tx.blocks().all())) {
+                    t.row(b.id(), b.name(), squads.stream().filter(s -> s.id() == b.squadId()).map(Squad::name)
+                            .findFirst().orElse(""), b.startsOn(), b.endsOn(), b.picks().size(), b.aim());
+                }
+            }
+            t.write(spec.commandLine().getOut(), output.format);
+            return 0;
+        }
+    }
+
+    @Command(name = "new", mixinStandardHelpOptions = true, description = "Create a training block for a squad.")
+    static final class NewBlock implements Callable<Integer> {
+        @Mixin
+        DbOption db;
+
+        @Option(names = "--squad", required = true, paramLabel = "NAME", description = "the squad")
+        String squad;
+
+        @Option(names = "--name", required = true, paramLabel = "NAME", description = "the block's name (unique)")
+        String name;
+
+        @Option(names = "--start", required = true, paramLabel = "DATE", description = "first day, yyyy-mm-dd")
+        LocalDate start;
+
+        @Option(names = "--end", required = true, paramLabel = "DATE", description = "last day, yyyy-mm-dd")
+        LocalDate end;
+
+        @Option(names = "--aim", defaultValue = "", paramLabel = "TEXT", description = "what the block is for")
+        String aim;
+
+        @Option(names = "--pick", paramLabel = "PERSON_ID=BEFORE_DATE,AFTER_DATE",
+                description = "a member's before and after visits, when not the default")
+        List<String> picks = new ArrayList<>();
+
+        @Spec
+        picocli.CommandLine.Model.CommandSpec spec;
+
+        @Override
+        public Integer call() {
+            if (end.isBefore(start)) {
+                throw new StoreException("The last day " + end + " is before the first day " + start + ".");
+            }
+            try (Database d = db.open()) {
+                Squad s = d.inTransaction(tx -> tx.squads().all()).stream().filter(x -> x.name().equalsIgnoreCase(
+                        squad.strip())).findFirst().orElseThrow(() -> new StoreException("There is no squad called \""
+                        + squad + "\" (see the people command for the squads)."));
+                Map<Long, TrainingBlock.Pick> chosen = picks(d, picks);
+                TrainingBlock b = d.inTransaction(tx -> tx.blocks().insert(new TrainingBlock(0, name, s.id(), start, end,
+                        aim, chosen)));
+                spec.commandLine().getOut().println("Created " + b.name() + " for " + s.name() + ", " + b.startsOn()
+                        + " to " + b.endsOn() + " (block-report --block \"" + b.name() + "\" reviews it).");
+            }
+            return 0;
+        }
+    }
+
+    @Command(name = "edit", mixinStandardHelpOptions = true, description = "Change a training block.")
+    static final class EditBlock implements Callable<Integer> {
+        @Mixin
+        DbOption db;
+
+        @Parameters(index = "0", paramLabel = "BLOCK", description = "the block's name")
+        String block;
+
+        @Option(names = "--name", paramLabel = "NAME", description = "a new name")
+        String name;
+
+        @Option(names = "--start", paramLabel = "DATE")
+        LocalDate start;
+
+        @Option(names = "--end", paramLabel = "DATE")
+        LocalDate end;
+
+        @Option(names = "--aim", paramLabel = "TEXT")
+        String aim;
+
+        @Option(names = "--pick", paramLabel = "PERSON_ID=BEFORE_DATE,AFTER_DATE",
+                description = "a member's before and after visits (replaces that member's earlier choice)")
+        List<String> picks = new ArrayList<>();
+
+        @Option(names = "--default-visits", description = "drop every chosen visit: all members take the default")
+        boolean defaults;
+
+        @Spec
+        picocli.CommandLine.Model.CommandSpec spec;
+
+        @Override
+        public Integer call() {
+            try (Database d = db.open()) {
+                TrainingBlock b = named(d, block);
+                Map<Long, TrainingBlock.Pick> chosen = new HashMap<>(defaults ? Map.of() : b.picks());
+                chosen.putAll(picks(d, picks));
+                LocalDate s = start != null ? start : b.startsOn();
+                LocalDate e = end != null ? end : b.endsOn();
+                if (e.isBefore(s)) {
+                    throw new StoreException("The last day " + e + " is before the first day " + s + ".");
+                }
+                TrainingBlock changed = new TrainingBlock(b.id(), name != null ? name : b.name(), b.squadId(), s, e,
+                        aim != null ? aim : b.aim(), chosen);
+                d.inTransaction(tx -> {
+                    tx.blocks().update(changed);
+                    return null;
+                });
+                spec.commandLine().getOut().println("Changed " + changed.name() + ": " + changed.startsOn() + " to "
+                        + changed.endsOn() + ", " + changed.picks().size() + " member(s) with chosen visits.");
+            }
+            return 0;
+        }
+    }
+
+    @Command(name = "delete", mixinStandardHelpOptions = true,
+            description = "Delete a training block (its visits stay).")
+    static final class DeleteBlock implements Callable<Integer> {
+        @Mixin
+        DbOption db;
+
+        @Parameters(index = "0", paramLabel = "BLOCK", description = "the block's name")
+        String block;
+
+        @Option(names = "--yes", description = "Do not ask for confirmation.")
+        boolean yes;
+
+        @Spec
+        picocli.CommandLine.Model.CommandSpec spec;
+
+        @Override
+        public Integer call() {
+            PrintWriter out = spec.commandLine().getOut();
+            try (Database d = db.open()) {
+                TrainingBlock b = named(d, block);
+                if (!yes && !Confirmation.ask(out, "This deletes the training block " + b.name() + " (" + b.startsOn()
+                        + " to " + b.endsOn() + "); its visits stay.", "DELETE")) {
+                    out.println("Nothing was deleted.");
+                    return 1;
+                }
+                d.inTransaction(tx -> tx.blocks().delete(b.id()));
+                out.println("Deleted the training block " + b.name() + "; its visits stay.");
+            }
+            return 0;
+        }
+    }
+}
