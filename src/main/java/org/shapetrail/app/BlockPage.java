@@ -19,7 +19,7 @@ import org.shapetrail.noise.Verdict;
  * and after, the table of athletes and who was left out.
  */
 public record BlockPage(String summary, List<String> athletes, List<AthleteLine> rows, List<String> leftOut,
-                        ChartModel chart, ChartModel profile) {
+                        ChartModel chart, java.util.function.DoubleFunction<ChartModel> chartAt, ChartModel profile) {
     /** One athlete's line of the table: every cell in full. */
     public record AthleteLine(String name, String before, String after, String change, String sad, String words) {
     }
@@ -77,7 +77,8 @@ public record BlockPage(String summary, List<String> athletes, List<AthleteLine>
             profile = new ProfileChartBuilder(r.block().name()).line("before", g.before().meanRating(), sds(r, true))
                     .line("after", g.after().meanRating(), sds(r, false)).build();
         }
-        return new BlockPage(summary, athletes, rows, left, chart.buildAroundData(8), profile);
+        return new BlockPage(summary, athletes, rows, left, chart.buildAroundData(8), h -> chart.buildAroundData(8, h),
+                profile);
     }
 
     /** Sample SD of each component over the athletes, before or after (Commons Math). */

@@ -237,7 +237,7 @@ final class BlocksPageView {
                     summary.setText(page.summary());
                     athletes.getItems().setAll(page.rows());
                     leftOut.setText(page.leftOut().isEmpty() ? "" : "Left out: " + String.join("; ", page.leftOut()));
-                    chart.setModel(page.chart());
+                    chart.setLayout(page.chartAt());
                     profile.setModel(page.profile());
                 });
     }

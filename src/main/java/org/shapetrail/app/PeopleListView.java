@@ -111,7 +111,7 @@ final class PeopleListView {
         Label count = new Label();
         count.setId("people-count");
         vm.rows().addListener((ListChangeListener<PersonRow>) c -> count.setText(
-                vm.rows().size() + " shown · click a column to sort (Growth or the change: largest first)"));
+                vm.rows().size() + " shown · ▲ rapid growth · click a column to sort (Growth or the change: largest first)"));
         HBox filters = new HBox(6, squad, age, maturity);
         HBox periodLine = new HBox(6, new Label("Change over"), period, from, to);
         periodLine.setAlignment(javafx.geometry.Pos.CENTER_LEFT);

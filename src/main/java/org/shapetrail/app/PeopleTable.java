@@ -26,10 +26,11 @@ final class PeopleTable {
     private final TableView<PersonRow> table = new TableView<>();
     private final Locale locale;
     private final List<Fitted> fitted = new ArrayList<>();
-    private final Label changeHeader = new Label("Latest change");
+    private final Label changeHeader = new Label("Latest\nchange");
 
     /** A column with the text each row shows in it, for sizing. */
-    private record Fitted(TableColumn<PersonRow, ?> column, Function<PersonRow, String> text, Label header) {
+    private record Fitted(TableColumn<PersonRow, ?> column, Function<PersonRow, String> text, Label header,
+                          boolean boldCells) {
     }
 
     PeopleTable(String id, Locale locale, boolean compact, ObservableList<PersonRow> rows) {
@@ -40,14 +41,14 @@ final class PeopleTable {
         sorted.comparatorProperty().bind(table.comparatorProperty());
         table.setItems(sorted);
         add(text("Name", PersonRow::name), PersonRow::name, "Name", "The person's name; click to open their page.");
-        TableColumn<PersonRow, PersonRow> age = custom(PersonRow::age, r -> Numbers.fmt(locale, r.age(), 1), false);
+        TableColumn<PersonRow, PersonRow> age = custom(PersonRow::age, r -> Numbers.fmt(locale, r.age(), 1));
         add(age, r -> Numbers.fmt(locale, r.age(), 1), "Age", "Decimal age at the latest visit, years.");
         if (!compact) {
             add(text("Squad", PersonRow::squad), PersonRow::squad, "Squad", "The squad the person belongs to today.");
         }
-        add(text("Somatotype", PersonRow::rating), PersonRow::rating, "Somatotype",
-                "The latest Heath-Carter rating, endomorphy-mesomorphy-ectomorphy.");
-        TableColumn<PersonRow, PersonRow> change = custom(PersonRow::multiple, this::changeText, true);
+        add(text("Rating", PersonRow::rating), PersonRow::rating, "Rating",
+                "The latest somatotype: its Heath-Carter rating, endomorphy-mesomorphy-ectomorphy.");
+        TableColumn<PersonRow, PersonRow> change = custom(PersonRow::multiple, this::changeText);
         change.setCellFactory(c -> new TableCell<>() {
             @Override
             protected void updateItem(PersonRow r, boolean empty) {
@@ -70,11 +71,11 @@ final class PeopleTable {
                 });
             }
         });
-        fitted.add(new Fitted(change, this::changeText, changeHeader));
+        fitted.add(new Fitted(change, this::changeText, changeHeader, true));
         changeHeader.setTooltip(new Tooltip(changeTip()));
         change.setGraphic(changeHeader);
         table.getColumns().add(change);
-        TableColumn<PersonRow, PersonRow> growth = custom(PersonRow::velocity, this::growthText, true);
+        TableColumn<PersonRow, PersonRow> growth = custom(PersonRow::velocity, this::growthText);
         growth.setCellFactory(c -> new TableCell<>() {
             @Override
             protected void updateItem(PersonRow r, boolean empty) {
@@ -90,31 +91,41 @@ final class PeopleTable {
                 }
             }
         });
-        add(growth, this::growthText, "Growth cm/y", "Stature velocity at the latest visit, cm a year; with its error"
-                + " (±) when it rests on less than six months. ▲ rapid: above the alert threshold over six months or"
-                + " more.");
+        add(growth, this::growthText, "Growth\ncm/y", "Stature velocity at the latest visit, cm a year; with its error"
+                + " (±) when it rests on less than six months. ▲ rapid growth: above the alert threshold over six"
+                + " months or more.");
         add(text("Maturity", r -> r.maturity() == null ? "" : r.maturity().words()),
                 r -> r.maturity() == null ? "" : r.maturity().words(), "Maturity",
                 "Maturity status from the estimated maturity offset (about ±0.6 years of error).");
         rows.addListener((javafx.collections.ListChangeListener<PersonRow>) c -> fitWidths());
+        // the first click on the change or growth column puts the largest first (the table would start ascending)
+        table.getSortOrder().addListener((javafx.collections.ListChangeListener<TableColumn<PersonRow, ?>>) c -> {
+            while (c.next()) {
+                for (TableColumn<PersonRow, ?> added : c.getAddedSubList()) {
+                    if (added == change || added == growth) {
+                        added.setSortType(TableColumn.SortType.DESCENDING);
+                    }
+                }
+            }
+        });
         fitWidths();
     }
 
     private String changeText(PersonRow r) {
-        return r.change() == null ? "" : PersonPage.cell(r.change(), locale);
+        return r.change() == null ? "" : PersonPage.shortCell(r.change(), locale);
     }
 
     private String growthText(PersonRow r) {
         if (Double.isNaN(r.velocity())) {
             return "";
         }
-        return Numbers.fmt(locale, r.velocity(), 1) + (r.shortInterval() ? " ± " + Numbers.fmt(locale, r.velocitySe(), 1)
-                : "") + (r.rapidGrowth() ? "  ▲ rapid" : "");
+        return Numbers.fmt(locale, r.velocity(), 1) + (r.shortInterval() ? " ±" + Numbers.fmt(locale, r.velocitySe(), 1)
+                : "") + (r.rapidGrowth() ? " ▲" : "");
     }
 
     private static String changeTip() {
         return "The noise multiple of the change over the period and the verdict it reads as: 1.00 or more is beyond"
-                + " noise, 0.77 to 0.99 borderline. Hover a cell for the dates and the distance moved (SAD, in"
+                + " noise (\"beyond\"), 0.77 to 0.99 borderline, below that within noise (\"within\"). Hover a cell for the dates and the distance moved (SAD, in"
                 + " somatotype units, the same units as the ratings). The first click sorts the largest first.";
     }
 
@@ -124,7 +135,9 @@ final class PeopleTable {
 
     /** Names the period in the change column's header. */
     void setPeriod(Period p) {
-        changeHeader.setText(p.header(locale));
+        changeHeader.setText(p.header(locale).replaceFirst(" ", "\n"));
+        changeHeader.setTextAlignment(javafx.scene.text.TextAlignment.CENTER);
+        changeHeader.setTooltip(new Tooltip(p.header(locale) + ". " + changeTip()));
         fitWidths();
     }
 
@@ -134,18 +147,15 @@ final class PeopleTable {
         return c;
     }
 
-    /** A column holding the row, sorted by {@code key} (largest first on the first click when {@code descending}). */
+    /** A column holding the row, sorted by {@code key}. */
     private static TableColumn<PersonRow, PersonRow> custom(Function<PersonRow, Double> key,
-                                                           Function<PersonRow, String> text, boolean descending) {
+                                                           Function<PersonRow, String> text) {
         TableColumn<PersonRow, PersonRow> c = new TableColumn<>();
         c.setCellValueFactory(d -> new SimpleObjectProperty<>(d.getValue()));
         c.setComparator(Comparator.comparingDouble(r -> {
             double v = key.apply(r);
             return Double.isNaN(v) ? Double.NEGATIVE_INFINITY : v;
         }));
-        if (descending) {
-            c.setSortType(TableColumn.SortType.DESCENDING);
-        }
         c.setCellFactory(col -> new TableCell<>() {
             @Override
             protected void updateItem(PersonRow r, boolean empty) {
@@ -159,19 +169,24 @@ final class PeopleTable {
     private void add(TableColumn<PersonRow, ?> c, Function<PersonRow, String> text, String header, String tip) {
         Label h = new Label(header);
         h.setTooltip(new Tooltip(tip));
+        h.setTextAlignment(javafx.scene.text.TextAlignment.CENTER);
         c.setGraphic(h);
-        fitted.add(new Fitted(c, text, h));
+        fitted.add(new Fitted(c, text, h, header.startsWith("Growth")));
         table.getColumns().add(c);
     }
 
     /** Every column as wide as its widest text (header or cell), plus the cell's padding and the sort arrow. */
     private void fitWidths() {
-        // the stylesheet's 13 px, bold as verdict and alert cells are: the widest a text is drawn
-        Font font = Font.font(Font.getDefault().getFamily(), javafx.scene.text.FontWeight.BOLD, 13);
+        // the stylesheet's 13 px: headers are bold (the theme's), as are verdict and alert cells
+        Font plain = Font.font(Font.getDefault().getFamily(), 13);
+        Font bold = Font.font(Font.getDefault().getFamily(), javafx.scene.text.FontWeight.BOLD, 13);
         for (Fitted f : fitted) {
-            double w = width(f.header().getText(), font) + 28; // header padding and room for the sort arrow
+            double w = 0;
+            for (String line : f.header().getText().split("\n")) {
+                w = Math.max(w, width(line, bold) + 18); // header padding and room for the sort arrow
+            }
             for (PersonRow r : table.getItems()) {
-                w = Math.max(w, width(f.text().apply(r), font) + 16);
+                w = Math.max(w, width(f.text().apply(r), f.boldCells() ? bold : plain) + 12);
             }
             f.column().setPrefWidth(Math.ceil(w));
             f.column().setMinWidth(Math.ceil(w));

@@ -68,7 +68,7 @@ public record Period(Kind kind, LocalDate from, LocalDate to) {
         return switch (kind) {
             case LATEST -> "Latest change";
             case SEASON, YEAR, SINCE -> "Change since " + from.format(f);
-            case BETWEEN -> "Change " + from.format(f) + " – " + to.format(f);
+            case BETWEEN -> "Change " + from.format(f) + " to " + to.format(f);
         };
     }
 }

@@ -34,13 +34,14 @@ public record PersonPage(String title, List<String> profile, String latestChange
         g.velocity().filter(v -> !adult).ifPresent(v -> {
             String line = "Stature velocity " + velocity(v, locale);
             if (v.shortInterval()) {
-                line += " — from less than six months, so its error is wide and it never raises the rapid-growth"
-                        + " alert alone (common practice: velocities are read over six months or more)"
-                        + g.longerVelocity().map(l -> "; over the last " + Numbers.fmt(locale, l.intervalYears(), 2)
-                        + " years: " + velocity(l, locale)).orElse("");
+                // common practice: a velocity is read over six months or more (Velocity.ALERT_MIN_DAYS)
+                line += " (under six months: a wide error, never the alert on its own)"
+                        + g.longerVelocity().map(l -> "; " + velocity(l, locale)).orElse("");
             }
-            profile.add(line + (g.rapidGrowth() ? " — RAPID GROWTH (over six months or more). " + GrowthAlert.CAUTION
-                    : ""));
+            profile.add(line + (g.rapidGrowth() ? " — RAPID GROWTH" : ""));
+            if (g.rapidGrowth()) {
+                profile.add(GrowthAlert.CAUTION);
+            }
         });
         if (!adult && !g.otherVelocities().isEmpty()) {
             List<String> parts = new ArrayList<>();
@@ -105,6 +106,15 @@ public record PersonPage(String title, List<String> profile, String latestChange
                     : ". A long move, but in the direction the measurer's repeat error takes most";
         }
         return s;
+    }
+
+    /** A narrow cell: the shown noise multiple and one word of the verdict, e.g. "1.43× beyond" (list tables). */
+    public static String shortCell(ChangeVerdict v, Locale locale) {
+        return v.multipleText(locale) + "× " + switch (v.verdict()) {
+            case BEYOND_NOISE -> "beyond";
+            case BORDERLINE -> "borderline";
+            case WITHIN_NOISE -> "within";
+        };
     }
 
     /** A table cell: the shown noise multiple and the verdict it reads as, e.g. "1.43× beyond noise". */

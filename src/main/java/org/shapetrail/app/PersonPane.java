@@ -87,7 +87,7 @@ public final class PersonPane extends BorderPane {
         regions.setId("category-regions");
         regions.selectedProperty().addListener((o, a, b) -> {
             if (shown != null) {
-                chart.setModel(org.shapetrail.chart.Charts.migration(shown, true, shownLocale, false, b));
+                showChart();
             }
         });
         BorderPane chartBox = new BorderPane(chart);
@@ -156,13 +156,20 @@ public final class PersonPane extends BorderPane {
         visits.getItems().setAll(page.visits());
         shown = h;
         shownLocale = locale;
-        chart.setModel(regions.isSelected() ? org.shapetrail.chart.Charts.migration(h, true, locale, false, true)
-                : page.chart());
+        showChart();
         growth.setModel(org.shapetrail.chart.Charts.growth(h));
         spaceRatings = h.rated().stream().map(r -> r.somatotype().rating()).toList();
         if (space != null) {
             space.show(spaceRatings);
         }
+    }
+
+    /** The migration path, its date labels laid out for the size the chart is drawn at. */
+    private void showChart() {
+        PersonHistory h = shown;
+        Locale l = shownLocale;
+        boolean withRegions = regions.isSelected();
+        chart.setLayout(height -> org.shapetrail.chart.Charts.migration(h, true, l, false, withRegions, height));
     }
 
     public TableView<VisitLine> visitsTable() {

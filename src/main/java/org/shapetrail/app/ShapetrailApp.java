@@ -77,13 +77,28 @@ public final class ShapetrailApp extends Application {
         return f;
     }
 
+    /**
+     * The window's first size: 1440 × 900 (the people list and the person page side by side without a cut
+     * column), or the screen's usable area where that is smaller.
+     */
+    static final double DEFAULT_WIDTH = Math.min(1440, screen().getWidth());
+    static final double DEFAULT_HEIGHT = Math.min(900, screen().getHeight());
+
+    private static javafx.geometry.Rectangle2D screen() {
+        try {
+            return javafx.stage.Screen.getPrimary().getVisualBounds();
+        } catch (RuntimeException | Error e) {
+            return new javafx.geometry.Rectangle2D(0, 0, 1440, 900); // before the toolkit (tests of the model)
+        }
+    }
+
     /** Builds and shows the window on {@code file}; tests call this with their own runner and locale. */
     public static Workbench show(Stage stage, Path file, TaskRunner runner, Locale locale, boolean remember) {
         WorkbenchViewModel vm = new WorkbenchViewModel(runner);
         Workbench workbench = new Workbench(vm, locale);
         probe("workbench built");
-        Scene scene = new Scene(workbench.root(), remember ? PREFS.getDouble("width", 1360) : 1360,
-                remember ? PREFS.getDouble("height", 860) : 860);
+        Scene scene = new Scene(workbench.root(), remember ? PREFS.getDouble("width", DEFAULT_WIDTH) : DEFAULT_WIDTH,
+                remember ? PREFS.getDouble("height", DEFAULT_HEIGHT) : DEFAULT_HEIGHT);
         scene.getStylesheets().add(ShapetrailApp.class.getResource("shapetrail.css").toExternalForm());
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.F, KeyCombination.SHORTCUT_DOWN),
                 () -> scene.lookup("#search").requestFocus());

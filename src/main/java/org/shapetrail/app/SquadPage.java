@@ -21,7 +21,8 @@ import org.shapetrail.store.TrainingBlock;
  * dispersion, the mean rating and SAM in words, members with their latest verdict and growth alert, and
  * the squad's training blocks.
  */
-public record SquadPage(String summary, List<PersonRow> members, List<String> blocks, ChartModel chart) {
+public record SquadPage(String summary, List<PersonRow> members, List<String> blocks, ChartModel chart,
+                        java.util.function.DoubleFunction<ChartModel> chartAt) {
     public static SquadPage of(Loaded l, Squad squad, LocalDate day, Locale locale) {
         Academy a = l.builder().academy();
         List<PersonRow> members = new ArrayList<>();
@@ -56,6 +57,6 @@ public record SquadPage(String summary, List<PersonRow> members, List<String> bl
                 blocks.add(b.name() + ": " + b.startsOn() + " to " + b.endsOn());
             }
         }
-        return new SquadPage(summary, members, blocks, chart.buildAroundData(10));
+        return new SquadPage(summary, members, blocks, chart.buildAroundData(10), h -> chart.buildAroundData(10, h));
     }
 }

@@ -101,7 +101,7 @@ final class SquadPageView {
             memberRows.setAll(page.members());
             blocks.getChildren().setAll(page.blocks().isEmpty() ? List.of(new Label("none"))
                     : page.blocks().stream().map(Label::new).toList());
-            chart.setModel(page.chart());
+            chart.setLayout(page.chartAt());
         });
     }
 

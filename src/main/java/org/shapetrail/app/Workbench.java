@@ -108,7 +108,7 @@ public final class Workbench {
         pages.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> fillCurrent());
         pages.setId("pages");
         SplitPane split = new SplitPane(people.root(), pages);
-        split.setDividerPositions(0.42);
+        split.setDividerPositions(0.51);
         return split;
     }
 

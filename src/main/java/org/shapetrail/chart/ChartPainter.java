@@ -4,13 +4,28 @@ import java.util.List;
 
 /** Walks a chart model and draws it on a {@link DrawTarget} through a {@link Viewport}. */
 public final class ChartPainter {
+    /**
+     * The model laid out for the height its box will really be drawn at in a {@code width} × {@code height}
+     * area (the margin and the chart's proportions make it smaller than the area): labels placed for the
+     * area's height would run into each other when drawn smaller.
+     */
+    public static ChartModel laidOutFor(java.util.function.DoubleFunction<ChartModel> layout, double width,
+                                        double height) {
+        ChartModel first = layout.apply(height);
+        double drawn = Viewport.fit(first, width, height, MARGIN, 1, 0, 0).scale() * (first.maxY() - first.minY());
+        return layout.apply(drawn);
+    }
+
+    /** The margin round the chart's box, device points. */
+    public static final double MARGIN = 24;
+
     private ChartPainter() {
     }
 
     /** Draws the whole model at the given size, zoom and pan. */
     public static Viewport paint(ChartModel m, DrawTarget t, double width, double height, double zoom, double panX,
                                  double panY) {
-        Viewport v = Viewport.fit(m, width, height, 24, zoom, panX, panY);
+        Viewport v = Viewport.fit(m, width, height, MARGIN, zoom, panX, panY);
         t.begin(width, height, Palette.PAPER);
         for (Primitive p : m.primitives()) {
             if (p instanceof Primitive.Path path) {

@@ -41,6 +41,12 @@ public final class Charts {
     /** As above; {@code regions} adds the category regions. */
     public static ChartModel migration(PersonHistory h, boolean ellipses, java.util.Locale locale, boolean legend,
                                        boolean regions) {
+        return migration(h, ellipses, locale, legend, regions, 520);
+    }
+
+    /** As above, with the labels laid out for a chart {@code heightPt} tall (see ChartCanvas#setLayout). */
+    public static ChartModel migration(PersonHistory h, boolean ellipses, java.util.Locale locale, boolean legend,
+                                       boolean regions, double heightPt) {
         List<SomatochartBuilder.PathPoint> pts = new ArrayList<>();
         for (VisitResult r : h.rated()) {
             pts.add(new SomatochartBuilder.PathPoint(r.visit().measuredAt().toLocalDate(), r.somatotype().rating(),
@@ -54,6 +60,6 @@ public final class Charts {
         if (regions) {
             b.withCategoryRegions();
         }
-        return b.path(h.person().displayName(), pts, verdicts, ellipses).buildAroundData(7);
+        return b.path(h.person().displayName(), pts, verdicts, ellipses).buildAroundData(7, heightPt);
     }
 }

@@ -42,6 +42,17 @@ public final class LabelPlacer {
         taken.add(new Box(p.x() - hx, p.y() - hy, p.x() + hx, p.y() + hy));
     }
 
+    /** Reserves a line's path (a step of a migration path) so labels keep off it: small boxes every few points. */
+    public void reserveLine(Point a, Point b, double widthPt) {
+        double dx = (b.x() - a.x()) / unitsPerPtX;
+        double dy = (b.y() - a.y()) / unitsPerPtY;
+        int n = Math.max(1, (int) Math.ceil(Math.hypot(dx, dy) / 3));
+        for (int i = 1; i < n; i++) {
+            double t = (double) i / n;
+            reserve(new Point(a.x() + t * (b.x() - a.x()), a.y() + t * (b.y() - a.y())), widthPt);
+        }
+    }
+
     /** Tries to place {@code text} near {@code p}; returns true when it was placed. */
     public boolean place(Point p, String text, double sizePt, String colour) {
         // text width estimate: 0.56 em per character (sans-serif digits and dashes), height 1.2 em

@@ -35,6 +35,8 @@ public final class SomatochartBuilder {
     private final List<Primitive> under = new ArrayList<>();
     private final List<Primitive> over = new ArrayList<>();
     private final List<Object[]> reserved = new ArrayList<>();
+    /** Steps and arrows, whose lines labels keep off: {from, to}. */
+    private final List<Point[]> lines = new ArrayList<>();
     private final List<Object[]> wanted = new ArrayList<>();
     private final Locale locale;
     private LabelPlacer labels;
@@ -118,11 +120,12 @@ public final class SomatochartBuilder {
         frame.add(new Primitive.Segment(ENDO_CORNER, MESO_ECTO_MID, false, axis));
         frame.add(new Primitive.Segment(MESO_CORNER, ENDO_ECTO_MID, false, axis));
         frame.add(new Primitive.Segment(ECTO_CORNER, ENDO_MESO_MID, false, axis));
-        frame.add(new Primitive.Text(new Point(ENDO_CORNER.x() - 0.3, ENDO_CORNER.y() - 1.6), "ENDOMORPHY", 10,
+        // the corner names sit below their corners, clear of the outline
+        frame.add(new Primitive.Text(new Point(ENDO_CORNER.x() - 0.3, ENDO_CORNER.y() - 2.2), "ENDOMORPHY", 10,
                 Anchor.MIDDLE, true, Palette.MUTED));
         frame.add(new Primitive.Text(new Point(MESO_CORNER.x(), MESO_CORNER.y() + 0.9), "MESOMORPHY", 10,
                 Anchor.MIDDLE, true, Palette.MUTED));
-        frame.add(new Primitive.Text(new Point(ECTO_CORNER.x() + 0.3, ECTO_CORNER.y() - 1.6), "ECTOMORPHY", 10,
+        frame.add(new Primitive.Text(new Point(ECTO_CORNER.x() + 0.3, ECTO_CORNER.y() - 2.2), "ECTOMORPHY", 10,
                 Anchor.MIDDLE, true, Palette.MUTED));
         for (int v = -6; v <= 6; v += 6) {
             frame.add(new Primitive.Text(new Point(v, -13.0), Integer.toString(v), 8, Anchor.MIDDLE, false,
@@ -211,6 +214,27 @@ public final class SomatochartBuilder {
         return in;
     }
 
+    /**
+     * Names the three corners in other words than the trade's (letters to families say "skinfold rating",
+     * "muscle and bone build", "slenderness").
+     */
+    public SomatochartBuilder withAxisNames(String endo, String meso, String ecto) {
+        List<String> names = List.of(endo, meso, ecto);
+        List<String> trade = List.of("ENDOMORPHY", "MESOMORPHY", "ECTOMORPHY");
+        for (int i = 0; i < frame.size(); i++) {
+            if (frame.get(i) instanceof Primitive.Text t && trade.contains(t.text())) {
+                frame.set(i, new Primitive.Text(t.at(), names.get(trade.indexOf(t.text())), t.sizePt(), t.anchor(),
+                        t.bold(), t.colour()));
+            }
+        }
+        return this;
+    }
+
+    /** The whole chart (every corner and axis name in view), laid out for a chart {@code heightPt} tall. */
+    public ChartModel buildWhole(double heightPt) {
+        return build(-8.6, 8.6, -14.0, 14.0, heightPt);
+    }
+
     /** Leaves the key out of the model (the screen shows it beside the chart, at a fixed size). */
     public SomatochartBuilder withoutLegend() {
         legend = false;
@@ -225,16 +249,14 @@ public final class SomatochartBuilder {
         for (Verdict v : Verdict.values()) {
             all.add(new Primitive.Segment(new Point(x0, y + 3 * unitsPerPt), new Point(x0 + 26 * unitsPerPt / X_SCALE,
                     y + 3 * unitsPerPt), false, stepStyle(v, Palette.INK)));
-            all.add(new Primitive.Text(new Point(x0 + 32 * unitsPerPt / X_SCALE, y), "change " + v.words(), 8,
-                    Anchor.START, false, Palette.INK));
+            all.add(new Primitive.Text(new Point(x0 + 32 * unitsPerPt / X_SCALE, y), "change " + v.words(), 8, Anchor.START, false, Palette.INK));
             y -= 13 * unitsPerPt;
         }
         if (anyEllipse) {
             all.add(new Primitive.Path(Ellipses.polygon(x0 + 13 * unitsPerPt / X_SCALE, y + 3 * unitsPerPt,
                     new double[][] {{Math.pow(11 * unitsPerPt / X_SCALE, 2), 0}, {0, Math.pow(4.5 * unitsPerPt, 2)}}, 1,
                     24), true, new Style(Palette.NOISE, 0.6, new double[0], Palette.NOISE, 0.35)));
-            all.add(new Primitive.Text(new Point(x0 + 32 * unitsPerPt / X_SCALE, y), "95 % measurement-noise region",
-                    8, Anchor.START, false, Palette.INK));
+            all.add(new Primitive.Text(new Point(x0 + 32 * unitsPerPt / X_SCALE, y), "95 % measurement-noise region", 8, Anchor.START, false, Palette.INK));
         }
     }
 
@@ -277,6 +299,7 @@ public final class SomatochartBuilder {
                 Point from = pt(ordered.get(i - 1).rating());
                 Verdict v = verdicts == null ? Verdict.WITHIN_NOISE : verdicts.get(i - 1);
                 under.add(new Primitive.Segment(from, at, true, stepStyle(v, colour)));
+                lines.add(new Point[] {from, at});
             }
             String tip = name + "\n" + p.date() + "\n" + p.rating().toDisplayString();
             boolean last = i == ordered.size() - 1;
@@ -315,6 +338,7 @@ public final class SomatochartBuilder {
     /** An arrow between two ratings (a group's before/after), styled by verdict. */
     public SomatochartBuilder arrow(Rating from, Rating to, Verdict v, String colour) {
         under.add(new Primitive.Segment(pt(from), pt(to), true, stepStyle(v, colour)));
+        lines.add(new Point[] {pt(from), pt(to)});
         return this;
     }
 
@@ -411,6 +435,9 @@ public final class SomatochartBuilder {
         labels = new LabelPlacer(heightPt / (maxY - minY), X_SCALE);
         for (Object[] r : reserved) {
             labels.reserve((Point) r[0], (Double) r[1]);
+        }
+        for (Point[] l : lines) {
+            labels.reserveLine(l[0], l[1], 4);
         }
         for (Object[] w : wanted) {
             labels.place((Point) w[0], (String) w[1], (Double) w[2], (String) w[3]);

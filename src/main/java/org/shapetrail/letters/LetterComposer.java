@@ -315,7 +315,11 @@ public final class LetterComposer {
         if (pts.isEmpty()) {
             return null;
         }
-        return new SomatochartBuilder(h.person().displayName(), locale).path(h.person().displayName(), pts, verdicts,
-                true).buildAroundData(7, LetterPdf.CHART_PT);
+        // the whole chart at print size, its corners named as the letter names the ratings, so nothing is cut off
+        // the line styles are told in the paragraph above the chart, so the chart carries no key of its own
+        SomatochartBuilder b = new SomatochartBuilder(h.person().displayName(), locale).withoutLegend()
+                .withAxisNames("skinfold rating", "muscle and bone build", "slenderness")
+                .path(h.person().displayName(), pts, verdicts, true);
+        return org.shapetrail.chart.ChartPainter.laidOutFor(b::buildWhole, LetterPdf.CHART_PT, LetterPdf.CHART_PT);
     }
 }

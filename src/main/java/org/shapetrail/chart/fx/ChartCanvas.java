@@ -79,9 +79,25 @@ public final class ChartCanvas extends Pane {
     }
 
     public void setModel(ChartModel m) {
+        this.layout = null;
         this.model = m;
         redraw();
     }
+
+    /**
+     * Shows a chart whose labels are laid out for the size it is drawn at: {@code layoutFor} makes the model
+     * for a chart of the given height in points, and is asked again when the canvas or the zoom changes the
+     * drawn size by more than a tenth, so labels never run into each other however large the chart is shown.
+     */
+    public void setLayout(java.util.function.DoubleFunction<ChartModel> layoutFor) {
+        this.layout = layoutFor;
+        this.laidOutFor = 0;
+        this.model = layoutFor == null ? null : layoutFor.apply(520);
+        redraw();
+    }
+
+    private java.util.function.DoubleFunction<ChartModel> layout;
+    private double laidOutFor;
 
     public ChartModel model() {
         return model;
@@ -140,6 +156,15 @@ public final class ChartCanvas extends Pane {
     private void redraw() {
         if (model == null || getWidth() <= 0 || getHeight() <= 0) {
             return;
+        }
+        if (layout != null) {
+            // the height the chart's box is drawn at, in device points: labels are placed for it
+            double drawn = Viewport.fit(model, getWidth(), getHeight(), ChartPainter.MARGIN, zoom, panX, panY).scale()
+                    * (model.maxY() - model.minY());
+            if (laidOutFor == 0 || Math.abs(drawn - laidOutFor) > 0.1 * laidOutFor) {
+                laidOutFor = drawn;
+                model = layout.apply(drawn);
+            }
         }
         viewport = ChartPainter.paint(model, new FxTarget(canvas.getGraphicsContext2D()), getWidth(), getHeight(),
                 zoom, panX, panY);
