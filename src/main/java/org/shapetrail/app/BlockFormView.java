@@ -34,10 +34,10 @@ final class BlockFormView {
         name.setId("block-name");
         name.setPromptText("e.g. Pre-season strength block");
         name.textProperty().bindBidirectional(vm.name);
-        DatePicker start = new DatePicker();
+        DatePicker start = DatePickers.of(null, locale);
         start.setId("block-start");
         start.valueProperty().bindBidirectional(vm.start);
-        DatePicker end = new DatePicker();
+        DatePicker end = DatePickers.of(null, locale);
         end.setId("block-end");
         end.valueProperty().bindBidirectional(vm.end);
         TextArea aim = new TextArea();

@@ -46,11 +46,12 @@ final class BlocksPageView {
         summary.setWrapText(true);
         athletes.setId("block-athletes");
         athletes.setPlaceholder(new Label("Nobody in the squad has visits for both ends of this block."));
-        column("Athlete", BlockPage.AthleteLine::name, 150);
-        column("Before", BlockPage.AthleteLine::before, 150);
-        column("After", BlockPage.AthleteLine::after, 150);
-        column("Change ÷ noise limit", BlockPage.AthleteLine::change, 150);
-        column("Moved (SAD)", BlockPage.AthleteLine::sad, 85);
+        column("Athlete", BlockPage.AthleteLine::name, null);
+        column("Before", BlockPage.AthleteLine::before, "The visit that stands for the start: date and rating");
+        column("After", BlockPage.AthleteLine::after, "The visit that stands for the end: date and rating");
+        column("Change ÷\nnoise limit", BlockPage.AthleteLine::change, "The change as a multiple of its noise limit"
+                + " (1.00 or more: beyond noise) and the verdict it reads as");
+        column("Moved\n(SAD)", BlockPage.AthleteLine::sad, "The distance moved, in somatotype units");
         athletes.setRowFactory(t -> new javafx.scene.control.TableRow<>() {
             @Override
             protected void updateItem(BlockPage.AthleteLine line, boolean empty) {
@@ -84,13 +85,14 @@ final class BlocksPageView {
                 edit, delete, undo);
         VBox head = new VBox(6, actions, summary, leftOut);
         head.setPadding(new Insets(10, 12, 8, 12));
+        // the athletes' table across the page, every column in full; the two charts side by side below it
         SplitPane charts = new SplitPane(chart, profile);
-        charts.setOrientation(Orientation.VERTICAL);
-        charts.setDividerPositions(0.62);
+        charts.setDividerPositions(0.55);
         BorderPane chartBox = new BorderPane(charts);
         chartBox.setBottom(key);
         SplitPane split = new SplitPane(athletes, chartBox);
-        split.setDividerPositions(0.55);
+        split.setOrientation(Orientation.VERTICAL);
+        split.setDividerPositions(0.45);
         root.setCenter(split);
         root.setTop(head);
     }
@@ -99,10 +101,12 @@ final class BlocksPageView {
         return root;
     }
 
-    private void column(String name, java.util.function.Function<BlockPage.AthleteLine, String> f, double w) {
-        javafx.scene.control.TableColumn<BlockPage.AthleteLine, String> c = new javafx.scene.control.TableColumn<>(name);
+    private final FittedColumns<BlockPage.AthleteLine> fitted = new FittedColumns<>();
+
+    private void column(String name, java.util.function.Function<BlockPage.AthleteLine, String> f, String tip) {
+        javafx.scene.control.TableColumn<BlockPage.AthleteLine, String> c = new javafx.scene.control.TableColumn<>();
         c.setCellValueFactory(d -> new javafx.beans.property.SimpleStringProperty(f.apply(d.getValue())));
-        c.setPrefWidth(w);
+        fitted.add(c, f, name, tip, false);
         athletes.getColumns().add(c);
     }
 
@@ -236,6 +240,7 @@ final class BlocksPageView {
                             p -> l.histories().get(p.id())), ctx.locale);
                     summary.setText(page.summary());
                     athletes.getItems().setAll(page.rows());
+                    fitted.fit(page.rows());
                     leftOut.setText(page.leftOut().isEmpty() ? "" : "Left out: " + String.join("; ", page.leftOut()));
                     chart.setLayout(page.chartAt());
                     profile.setModel(page.profile());

@@ -18,14 +18,14 @@ final class LettersDialog {
     private LettersDialog() {
     }
 
-    static Optional<LetterSettings> ask(Window owner, String title) {
+    static Optional<LetterSettings> ask(Window owner, String title, java.util.Locale locale) {
         Dialog<LetterSettings> d = new Dialog<>();
         d.initOwner(owner);
         d.setTitle(title);
         d.setHeaderText("Progress letters: choose the period and who signs");
-        DatePicker from = new DatePicker(LocalDate.now().minusYears(1));
+        DatePicker from = DatePickers.of(LocalDate.now().minusYears(1), locale);
         from.setId("letters-from");
-        DatePicker to = new DatePicker(LocalDate.now());
+        DatePicker to = DatePickers.of(LocalDate.now(), locale);
         to.setId("letters-to");
         TextField academy = new TextField("Saltmarsh Bay Sports Academy");
         TextField sender = new TextField("the academy physiotherapist");

@@ -71,9 +71,9 @@ final class PeopleListView {
         period.setValue(Period.Kind.LATEST);
         period.setTooltip(new javafx.scene.control.Tooltip("The span of the change column: each person's first rated"
                 + " visit in it against their last"));
-        javafx.scene.control.DatePicker from = new javafx.scene.control.DatePicker(java.time.LocalDate.now().minusMonths(6));
+        javafx.scene.control.DatePicker from = DatePickers.of(java.time.LocalDate.now().minusMonths(6), ctx.locale);
         from.setId("period-from");
-        javafx.scene.control.DatePicker to = new javafx.scene.control.DatePicker(java.time.LocalDate.now());
+        javafx.scene.control.DatePicker to = DatePickers.of(java.time.LocalDate.now(), ctx.locale);
         to.setId("period-to");
         from.setPrefWidth(130);
         to.setPrefWidth(130);

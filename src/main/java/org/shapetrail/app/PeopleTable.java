@@ -1,8 +1,6 @@
 package org.shapetrail.app;
 
-import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.List;
 import java.util.Locale;
 import java.util.function.Function;
 import javafx.beans.property.SimpleObjectProperty;
@@ -13,8 +11,6 @@ import javafx.scene.control.TableCell;
 import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
 import javafx.scene.control.Tooltip;
-import javafx.scene.text.Font;
-import javafx.scene.text.Text;
 
 /**
  * A sortable table of people rows, used by the people browser and the squad page. Columns are as wide as
@@ -25,13 +21,8 @@ import javafx.scene.text.Text;
 final class PeopleTable {
     private final TableView<PersonRow> table = new TableView<>();
     private final Locale locale;
-    private final List<Fitted> fitted = new ArrayList<>();
-    private final Label changeHeader = new Label("Latest\nchange");
-
-    /** A column with the text each row shows in it, for sizing. */
-    private record Fitted(TableColumn<PersonRow, ?> column, Function<PersonRow, String> text, Label header,
-                          boolean boldCells) {
-    }
+    private final FittedColumns<PersonRow> fitted = new FittedColumns<>();
+    private final Label changeHeader;
 
     PeopleTable(String id, Locale locale, boolean compact, ObservableList<PersonRow> rows) {
         this.locale = locale;
@@ -71,9 +62,7 @@ final class PeopleTable {
                 });
             }
         });
-        fitted.add(new Fitted(change, this::changeText, changeHeader, true));
-        changeHeader.setTooltip(new Tooltip(changeTip()));
-        change.setGraphic(changeHeader);
+        changeHeader = fitted.add(change, this::changeText, "Latest\nchange", changeTip(), true);
         table.getColumns().add(change);
         TableColumn<PersonRow, PersonRow> growth = custom(PersonRow::velocity, this::growthText);
         growth.setCellFactory(c -> new TableCell<>() {
@@ -167,38 +156,11 @@ final class PeopleTable {
     }
 
     private void add(TableColumn<PersonRow, ?> c, Function<PersonRow, String> text, String header, String tip) {
-        Label h = new Label(header);
-        h.setTooltip(new Tooltip(tip));
-        h.setTextAlignment(javafx.scene.text.TextAlignment.CENTER);
-        c.setGraphic(h);
-        fitted.add(new Fitted(c, text, h, header.startsWith("Growth")));
+        fitted.add(c, text, header, tip, header.startsWith("Growth"));
         table.getColumns().add(c);
     }
 
-    /** Every column as wide as its widest text (header or cell), plus the cell's padding and the sort arrow. */
     private void fitWidths() {
-        // the stylesheet's 13 px: headers are bold (the theme's), as are verdict and alert cells
-        Font plain = Font.font(Font.getDefault().getFamily(), 13);
-        Font bold = Font.font(Font.getDefault().getFamily(), javafx.scene.text.FontWeight.BOLD, 13);
-        for (Fitted f : fitted) {
-            double w = 0;
-            for (String line : f.header().getText().split("\n")) {
-                w = Math.max(w, width(line, bold) + 18); // header padding and room for the sort arrow
-            }
-            for (PersonRow r : table.getItems()) {
-                w = Math.max(w, width(f.text().apply(r), f.boldCells() ? bold : plain) + 12);
-            }
-            f.column().setPrefWidth(Math.ceil(w));
-            f.column().setMinWidth(Math.ceil(w));
-        }
-    }
-
-    private static double width(String s, Font font) {
-        if (s == null || s.isEmpty()) {
-            return 0;
-        }
-        Text t = new Text(s);
-        t.setFont(font);
-        return t.getLayoutBounds().getWidth();
+        fitted.fit(table.getItems());
     }
 }

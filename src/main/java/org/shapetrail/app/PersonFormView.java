@@ -32,7 +32,7 @@ final class PersonFormView {
         ComboBox<Sex> sex = new ComboBox<>();
         sex.getItems().setAll(Sex.values());
         sex.valueProperty().bindBidirectional(vm.sex);
-        DatePicker birth = new DatePicker();
+        DatePicker birth = DatePickers.of(null, vm.locale());
         birth.valueProperty().bindBidirectional(vm.birth);
         TextField father = new TextField();
         father.textProperty().bindBidirectional(vm.father);

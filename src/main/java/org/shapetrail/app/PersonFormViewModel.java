@@ -164,6 +164,10 @@ public final class PersonFormViewModel {
         }
     }
 
+    public Locale locale() {
+        return locale;
+    }
+
     public boolean isEdit() {
         return editing != null;
     }

@@ -178,7 +178,7 @@ final class PersonPageView {
                 return null;
             }
         });
-        DatePicker from = new DatePicker(LocalDate.now());
+        DatePicker from = DatePickers.of(LocalDate.now(), ctx.locale);
         from.setId("move-from");
         GridPane g = new GridPane();
         g.setHgap(8);

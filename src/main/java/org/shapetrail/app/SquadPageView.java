@@ -111,7 +111,8 @@ final class SquadPageView {
         if (l == null || squad.isEmpty()) {
             return;
         }
-        Optional<LetterSettings> settings = LettersDialog.ask(ctx.window(), "Letters — " + squad.get().name());
+        Optional<LetterSettings> settings = LettersDialog.ask(ctx.window(), "Letters — " + squad.get().name(),
+                ctx.locale);
         if (settings.isEmpty()) {
             return;
         }

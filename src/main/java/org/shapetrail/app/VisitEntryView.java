@@ -51,11 +51,9 @@ public final class VisitEntryView {
         vm.dateProperty().addListener((o, a, b) -> who.setText((vm.isEdit() ? "Editing a visit of "
                 : "New visit for ") + vm.heading()));
 
-        DatePicker date = new DatePicker();
+        DatePicker date = DatePickers.of(null, vm.locale());
         date.setId("visit-date");
         date.valueProperty().bindBidirectional(vm.dateProperty());
-        date.setConverter(new javafx.util.converter.LocalDateStringConverter(java.time.format.FormatStyle.MEDIUM,
-                vm.locale(), java.time.chrono.IsoChronology.INSTANCE));
         ComboBox<Measurer> measurer = new ComboBox<>(vm.measurers());
         measurer.setId("visit-measurer");
         measurer.valueProperty().bindBidirectional(vm.measurerProperty());

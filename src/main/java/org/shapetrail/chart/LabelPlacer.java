@@ -42,6 +42,18 @@ public final class LabelPlacer {
         taken.add(new Box(p.x() - hx, p.y() - hy, p.x() + hx, p.y() + hy));
     }
 
+    /** Reserves the area of a text already drawn (the chart's own names), so labels keep off it. */
+    public void reserveText(Primitive.Text t) {
+        double w = t.text().length() * 0.56 * t.sizePt() * unitsPerPtX;
+        double h = 1.2 * t.sizePt() * unitsPerPtY;
+        double x0 = switch (t.anchor()) {
+            case START -> t.at().x();
+            case MIDDLE -> t.at().x() - w / 2;
+            case END -> t.at().x() - w;
+        };
+        taken.add(new Box(x0, t.at().y() - 0.2 * h, x0 + w, t.at().y() + 0.8 * h));
+    }
+
     /** Reserves a line's path (a step of a migration path) so labels keep off it: small boxes every few points. */
     public void reserveLine(Point a, Point b, double widthPt) {
         double dx = (b.x() - a.x()) / unitsPerPtX;

@@ -14,6 +14,9 @@ public final class ProfileChartBuilder {
     private final List<Primitive> lines = new ArrayList<>();
     private int series;
     private double maxRating = 6;
+    /** Heights of the names already placed at the lines' right ends; names keep this far apart (rating units). */
+    private final List<Double> nameRows = new ArrayList<>();
+    private static final double NAME_GAP = 0.45;
 
     public ProfileChartBuilder(String title) {
         this.title = title;
@@ -45,17 +48,25 @@ public final class ProfileChartBuilder {
             lines.add(new Primitive.Marker(p, shape, 8, Style.filled(colour, Palette.INK, 0.8), null,
                     name + ": " + Axes.label(Math.round(p.y() * 10) / 10.0)));
         }
-        lines.add(new Primitive.Text(new Point(3.12, pts.get(2).y()), name, 8.5, Anchor.START, false, colour));
+        // the line's name at its right end, moved up or down off a name already there (two means may end alike)
+        double y = pts.get(2).y();
+        for (double taken : nameRows) {
+            if (Math.abs(y - taken) < NAME_GAP) {
+                y = y >= taken ? taken + NAME_GAP : taken - NAME_GAP;
+            }
+        }
+        nameRows.add(y);
+        lines.add(new Primitive.Text(new Point(3.12, y), name, 8.5, Anchor.START, false, colour));
         return this;
     }
 
     public ChartModel build() {
         List<Primitive> all = new ArrayList<>();
         double top = Math.ceil(maxRating);
-        Axes.frame(all, 0.5, 3.5, 0, top, List.of(1.0, 2.0, 3.0), List.of("endomorphy", "mesomorphy", "ectomorphy"),
-                Axes.ticks(0, top, 6), "component", "rating", 0.25, 0.35);
+        Axes.frame(all, 0.5, 3.5, 0, top, List.of(1.0, 2.0, 3.0), List.of("endo", "meso", "ecto"),
+                Axes.ticks(0, top, 6), "component", "rating", 0.25, 0.55);
         all.addAll(lines);
         // wide rather than tall, so the three component names sit apart
-        return new ChartModel(title, -0.1, 4.4, -1.0, top + 0.6, 3.2, all);
+        return new ChartModel(title, -0.1, 4.4, -1.3, top + 0.6, 3.2, all);
     }
 }

@@ -439,6 +439,11 @@ public final class SomatochartBuilder {
         for (Point[] l : lines) {
             labels.reserveLine(l[0], l[1], 4);
         }
+        for (Primitive p : frame) {
+            if (p instanceof Primitive.Text t) {
+                labels.reserveText(t);
+            }
+        }
         for (Object[] w : wanted) {
             labels.place((Point) w[0], (String) w[1], (Double) w[2], (String) w[3]);
         }

@@ -65,16 +65,14 @@ class FirstHourGuiTest {
         return r.lookup("#people").queryAs(TableView.class);
     }
 
-    /** Every text drawn inside {@code root} that the skin cut short ("…") although its control holds more. */
+    /** Every text drawn inside {@code root} that the skin cut short (its ellipsis) although its control holds more. */
     static List<String> cut(Node root) {
         List<String> out = new ArrayList<>();
         for (Node n : root.lookupAll(".text")) {
-            if (n instanceof Text t && t.getText() != null && t.getText().endsWith("…")) {
-                Node p = t.getParent();
-                String full = p instanceof Labeled l ? l.getText() : "";
-                if (full != null && !full.endsWith("…")) {
-                    out.add(full);
-                }
+            if (n instanceof Text t && t.getText() != null && t.getParent() instanceof Labeled l
+                    && l.getText() != null && !t.getText().equals(l.getText())
+                    && t.getText().endsWith(l.getEllipsisString())) {
+                out.add(l.getText());
             }
         }
         return out;
