@@ -56,7 +56,7 @@ final class SquadPageView {
         head.setPadding(new Insets(10, 12, 8, 12));
         root.setTop(head);
         SplitPane split = new SplitPane(members, chart);
-        split.setDividerPositions(0.5);
+        split.setDividerPositions(0.64); // the members table in full beside the chart
         root.setCenter(split);
     }
 

@@ -181,6 +181,6 @@ class FirstHourGuiTest {
         assertTrue(robot.lookup("#visit-date").queryAs(DatePicker.class).isFocused()
                 || robot.lookup("#visit-date").queryAs(DatePicker.class).getEditor().isFocused(), "the date comes first");
         robot.interact(() -> robot.lookup("#stature-1").queryAs(TextField.class).setText("171.2"));
-        WorkbenchGuiTest.snapshot(robot.lookup("#visit-entry").query(), "visit-entry.png");
+        WorkbenchGuiTest.snapshot(robot.lookup("#visit-entry").query(), "visit-entry-junior.png");
     }
 }
