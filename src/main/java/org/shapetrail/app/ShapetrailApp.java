@@ -61,8 +61,15 @@ public final class ShapetrailApp extends Application {
         }
     }
 
-    /** The file named by {@code --db FILE}, else the last one opened, else the default (seeded with the demo). */
+    /**
+     * The file named by {@code --db FILE} or passed alone (a double click on an academy file), else the last
+     * one opened, else the default (seeded with the demo).
+     */
     static Path chooseStartFile(List<String> args) {
+        Path alone = org.shapetrail.cli.ShapetrailCli.academyFileArgument(args.toArray(String[]::new));
+        if (alone != null) {
+            return alone;
+        }
         for (int i = 0; i + 1 < args.size(); i++) {
             if (args.get(i).equals("--db")) {
                 return Path.of(args.get(i + 1));
@@ -81,24 +88,37 @@ public final class ShapetrailApp extends Application {
      * The window's first size: 1440 × 900 (the people list and the person page side by side without a cut
      * column), or the screen's usable area where that is smaller.
      */
-    static final double DEFAULT_WIDTH = Math.min(1440, screen().getWidth());
-    static final double DEFAULT_HEIGHT = Math.min(900, screen().getHeight());
+    static double defaultWidth() {
+        return Math.min(1440, screen().getWidth());
+    }
 
+    static double defaultHeight() {
+        return Math.min(900, screen().getHeight());
+    }
+
+    /**
+     * The screen's usable area. Asked only on the FX thread once the toolkit runs (never while the class
+     * loads: the launcher touches this class on the main thread before the toolkit, and a Screen looked
+     * at there can never be used again).
+     */
     private static javafx.geometry.Rectangle2D screen() {
-        try {
-            return javafx.stage.Screen.getPrimary().getVisualBounds();
-        } catch (RuntimeException | Error e) {
-            return new javafx.geometry.Rectangle2D(0, 0, 1440, 900); // before the toolkit (tests of the model)
-        }
+        return javafx.stage.Screen.getPrimary().getVisualBounds();
     }
 
     /** Builds and shows the window on {@code file}; tests call this with their own runner and locale. */
     public static Workbench show(Stage stage, Path file, TaskRunner runner, Locale locale, boolean remember) {
         WorkbenchViewModel vm = new WorkbenchViewModel(runner);
+        if (stage.getUserData() instanceof WorkbenchViewModel before) {
+            before.letGo(); // the window gets a new workbench: the old one's file is free again
+        }
+        stage.setUserData(vm);
+        stage.addEventHandler(javafx.stage.WindowEvent.WINDOW_HIDDEN, e -> vm.letGo());
         Workbench workbench = new Workbench(vm, locale);
         probe("workbench built");
-        Scene scene = new Scene(workbench.root(), remember ? PREFS.getDouble("width", DEFAULT_WIDTH) : DEFAULT_WIDTH,
-                remember ? PREFS.getDouble("height", DEFAULT_HEIGHT) : DEFAULT_HEIGHT);
+        double width = defaultWidth();
+        double height = defaultHeight();
+        Scene scene = new Scene(workbench.root(), remember ? PREFS.getDouble("width", width) : width,
+                remember ? PREFS.getDouble("height", height) : height);
         scene.getStylesheets().add(ShapetrailApp.class.getResource("shapetrail.css").toExternalForm());
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.F, KeyCombination.SHORTCUT_DOWN),
                 () -> scene.lookup("#search").requestFocus());

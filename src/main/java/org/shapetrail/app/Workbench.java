@@ -49,7 +49,7 @@ public final class Workbench {
             pages.getSelectionModel().select(personTab);
         }));
         root.getStyleClass().add("workbench");
-        root.setTop(header());
+        root.setTop(new VBox(header(), readOnlyBanner()));
         root.setCenter(body());
         root.disableProperty().bind(ctx.storing);
         root.setBottom(footer());
@@ -90,11 +90,33 @@ public final class Workbench {
                 root.getStyleClass().remove("dark");
             }
         });
-        HBox bar = new HBox(12, title, file, gap, bring, create, open, dark);
+        javafx.scene.control.MenuItem sample = new javafx.scene.control.MenuItem("Open the sample academy");
+        sample.setId("open-sample");
+        sample.setOnAction(e -> openSample());
+        javafx.scene.control.MenuItem about = new javafx.scene.control.MenuItem("About Shapetrail");
+        about.setId("about");
+        about.setOnAction(e -> about());
+        javafx.scene.control.MenuButton help = new javafx.scene.control.MenuButton("Help", null, sample, about);
+        help.setId("help-menu");
+        HBox bar = new HBox(12, title, file, gap, bring, create, open, help, dark);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.getStyleClass().add("app-header");
         bar.setPadding(new Insets(10, 14, 10, 14));
         return bar;
+    }
+
+    /** Shown only while another window has this file for editing (FileClaim). */
+    private Parent readOnlyBanner() {
+        Label note = new Label();
+        note.setId("read-only-note");
+        note.getStyleClass().add("read-only-note");
+        note.setWrapText(true);
+        note.setMaxWidth(Double.MAX_VALUE);
+        note.setPadding(new Insets(6, 14, 6, 14));
+        note.textProperty().bind(ctx.vm.readOnlyNoteProperty());
+        note.visibleProperty().bind(ctx.vm.readOnlyNoteProperty().isNotEmpty());
+        note.managedProperty().bind(note.visibleProperty());
+        return note;
     }
 
     private Parent body() {
@@ -212,18 +234,40 @@ public final class Workbench {
     private void chooseNewFile() {
         FileChooser fc = new FileChooser();
         fc.setTitle("A new, empty Shapetrail file");
-        fc.setInitialFileName("academy.sqlite");
-        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Shapetrail files", "*.sqlite"));
+        fc.setInitialFileName("academy.shapetrail");
+        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Shapetrail files", "*.shapetrail", "*.sqlite"));
         var f = fc.showSaveDialog(ctx.window());
         if (f != null) {
             ctx.vm.createAndOpen(f.toPath());
         }
     }
 
+    /**
+     * Opens the user's own copy of the sample academy (made in the data folder the first time), never the
+     * original that came with the app.
+     */
+    void openSample() {
+        try {
+            ctx.vm.open(org.shapetrail.store.DataFolder.sampleCopy(org.shapetrail.store.DataFolder.userFolder()));
+        } catch (org.shapetrail.store.StoreException e) {
+            ctx.vm.errorProperty().set(e.getMessage());
+        }
+    }
+
+    private void about() {
+        javafx.scene.control.Alert a = new javafx.scene.control.Alert(javafx.scene.control.Alert.AlertType.INFORMATION);
+        a.initOwner(ctx.window());
+        a.setTitle("About Shapetrail");
+        a.setHeaderText(org.shapetrail.store.AppVersion.named());
+        a.setContentText("Your files and settings are kept in " + org.shapetrail.store.DataFolder.userFolder()
+                + " unless you open a file elsewhere. " + Cautions.SHAPE_NOT_WORTH);
+        a.showAndWait();
+    }
+
     private void chooseFile() {
         FileChooser fc = new FileChooser();
         fc.setTitle("Open a Shapetrail file");
-        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Shapetrail files", "*.sqlite", "*.db"));
+        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Shapetrail files", "*.shapetrail", "*.sqlite", "*.db"));
         var f = fc.showOpenDialog(ctx.window());
         if (f != null) {
             ctx.vm.open(f.toPath());

@@ -49,6 +49,9 @@ public final class WorkbenchViewModel {
     private final ObjectProperty<PersonRow> selected = new SimpleObjectProperty<>();
     private final StringProperty status = new SimpleStringProperty("");
     private final StringProperty error = new SimpleStringProperty("");
+    private final StringProperty readOnlyNote = new SimpleStringProperty("");
+    private org.shapetrail.store.FileClaim claim;
+    private Path unclaimed;
     private AnalysisSettings settings = AnalysisSettings.standard();
 
     public WorkbenchViewModel(TaskRunner runner) {
@@ -64,6 +67,7 @@ public final class WorkbenchViewModel {
     /** Opens a file in the background, replacing the current one when done. */
     public void open(Path file) {
         error.set("");
+        claimFor(file);
         status.set("Opening " + file.getFileName() + " …");
         AnalysisSettings s = settings;
         runner.run("Opening " + file.getFileName(), progress -> load(file, s, progress), this::show, t -> {
@@ -135,7 +139,50 @@ public final class WorkbenchViewModel {
         }
     }
 
+    /**
+     * Takes the file for this window, or, when another window has it, works on it read-only and says who
+     * has it (FileClaim). Asked again on every open and reload, so the file becomes editable here once the
+     * other window lets go.
+     */
+    void claimFor(Path file) {
+        Path abs = file.toAbsolutePath().normalize();
+        if (claim != null && claim.database().equals(abs)) {
+            return;
+        }
+        letGo();
+        var got = org.shapetrail.store.FileClaim.claim(abs);
+        if (got.isPresent()) {
+            claim = got.get();
+            readOnlyNote.set("");
+        } else {
+            unclaimed = abs;
+            readOnlyNote.set(org.shapetrail.store.FileClaim.holder(abs)
+                    .map(who -> "Read-only: " + abs.getFileName() + " is open for editing in " + who + ". You can look"
+                            + " at everything here; to enter or change anything, close it there and open it again here.")
+                    .orElse(""));
+        }
+    }
+
+    /** Gives up this window's claim on its file (it opens another, or closes). */
+    public void letGo() {
+        if (claim != null) {
+            claim.close();
+            claim = null;
+        }
+        if (unclaimed != null) {
+            org.shapetrail.store.FileClaim.release(unclaimed);
+            unclaimed = null;
+        }
+        readOnlyNote.set("");
+    }
+
+    /** Empty, or the sentence saying this window has the file read-only and why. */
+    public StringProperty readOnlyNoteProperty() {
+        return readOnlyNote;
+    }
+
     void show(Loaded l) {
+        claimFor(l.file());
         loaded.set(l);
         Academy a = l.builder().academy();
         List<String> names = new ArrayList<>();

@@ -5,7 +5,7 @@ import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
 /** The command line: {@code java -jar shapetrail.jar COMMAND ...}; see docs/cli.md. */
-@Command(name = "shapetrail", mixinStandardHelpOptions = true, version = "Shapetrail 0.1",
+@Command(name = "shapetrail", mixinStandardHelpOptions = true, versionProvider = ShapetrailCli.Version.class,
         description = "Somatotype, growth and measurement-noise tools for practitioners.",
         subcommands = {RateCommand.class, PeopleCommand.class, TemCommand.class, ChangesCommand.class,
             GrowthCommand.class, BlockReportCommand.class, CompareSquadsCommand.class, LettersCommand.class,
@@ -39,8 +39,36 @@ public final class ShapetrailCli implements Runnable {
         return code;
     }
 
-    /** True when the arguments ask for the command line rather than the desktop window. */
+    /** {@code --version}: the version the pom states, the same in the jar and the installed app. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {org.shapetrail.store.AppVersion.named()};
+        }
+    }
+
+    /**
+     * True when the arguments ask for the command line rather than the desktop window: anything but
+     * nothing, {@code --db FILE}, or one academy file on its own (what a double click on the file passes).
+     */
     public static boolean wantsCommandLine(String[] args) {
-        return args.length > 0 && !args[0].startsWith("--db");
+        return args.length > 0 && !args[0].startsWith("--db") && academyFileArgument(args) == null;
+    }
+
+    /** The file when the only argument names an existing academy file (.shapetrail, .sqlite, .db), else null. */
+    public static java.nio.file.Path academyFileArgument(String[] args) {
+        if (args.length != 1 || args[0].startsWith("-")) {
+            return null;
+        }
+        String name = args[0].toLowerCase(java.util.Locale.ROOT);
+        if (!(name.endsWith(".shapetrail") || name.endsWith(".sqlite") || name.endsWith(".db"))) {
+            return null;
+        }
+        try {
+            java.nio.file.Path p = java.nio.file.Path.of(args[0]);
+            return java.nio.file.Files.isRegularFile(p) ? p : null;
+        } catch (java.nio.file.InvalidPathException e) {
+            return null;
+        }
     }
 }

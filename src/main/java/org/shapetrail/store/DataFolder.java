@@ -41,10 +41,28 @@ public final class DataFolder {
         return (xdg != null && !xdg.isBlank() ? Path.of(xdg) : Path.of(userHome, ".local", "share")).resolve("shapetrail");
     }
 
+    /** File name of the copy of the sample academy that Help → Open the sample academy opens. */
+    public static final String SAMPLE_COPY = "sample-academy.sqlite";
+
+    /**
+     * The user's own copy of the sample academy in {@code folder}, made from the bundled original the first
+     * time (later calls open the same copy, with whatever was tried in it; delete it for a fresh one). The
+     * installed original is never opened, so it stays as shipped.
+     */
+    public static Path sampleCopy(Path folder) {
+        Path p = folder.resolve(SAMPLE_COPY);
+        seedWithSample(p);
+        return p;
+    }
+
     /** The default file of this user on this machine. */
     public static Path defaultFile() {
-        return folder(System.getenv(), System.getProperty("user.home"), System.getProperty("os.name"))
-                .resolve(DEFAULT_FILE);
+        return userFolder().resolve(DEFAULT_FILE);
+    }
+
+    /** This user's data folder on this machine. */
+    public static Path userFolder() {
+        return folder(System.getenv(), System.getProperty("user.home"), System.getProperty("os.name"));
     }
 
     /**

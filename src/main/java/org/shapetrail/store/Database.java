@@ -78,7 +78,7 @@ public final class Database implements AutoCloseable {
             throw new StoreException("Cannot create the folder for " + abs + ": " + e.getMessage(), e);
         }
         boolean existed = Files.exists(abs) && sizeOf(abs) > 0;
-        boolean readOnly = existed && !writable(abs);
+        boolean readOnly = existed && (!writable(abs) || FileClaim.heldElsewhere(abs));
         SQLiteConfig config = new SQLiteConfig();
         config.setReadOnly(readOnly);
         config.enforceForeignKeys(true);
@@ -94,8 +94,7 @@ public final class Database implements AutoCloseable {
             c = ds.getConnection();
             int version = Migrations.currentVersion(c);
             if (version > Migrations.latest()) {
-                throw new StoreException("The file " + abs + " was written by a newer Shapetrail (schema " + version
-                        + "); this version reads up to schema " + Migrations.latest() + ". Update Shapetrail.");
+                throw new StoreException(newerFileMessage(abs, version, Migrations.writtenBy(c).orElse(null)));
             }
             Path backup = null;
             if (version < Migrations.latest() && readOnly) {
@@ -128,6 +127,14 @@ public final class Database implements AutoCloseable {
             closeQuietly(c);
             throw e;
         }
+    }
+
+    /** Names both versions: the one that wrote the file (when it says) and this one; the file is untouched. */
+    static String newerFileMessage(Path file, int schema, String writer) {
+        return "The file " + file + " was written by " + (writer == null ? "a newer Shapetrail" : writer) + " (schema "
+                + schema + "); this is " + AppVersion.named() + ", which reads files up to schema " + Migrations.latest()
+                + ". Open it with " + (writer == null ? "a newer Shapetrail" : writer + " or later")
+                + "; the file was not changed.";
     }
 
     /**
@@ -430,6 +437,12 @@ public final class Database implements AutoCloseable {
                 return new StoreException("The file " + file + " is damaged: SQLite finds it malformed (cut short or"
                         + " overwritten). Nothing was changed; restore it from a backup (the restore command) or use"
                         + " a copy made before.", e);
+            }
+            java.util.Optional<String> holder = FileClaim.holder(Path.of(file));
+            if (code.name().startsWith("SQLITE_READONLY") && holder.isPresent()) {
+                return new StoreException("The file " + file + " is open for editing in " + holder.get()
+                        + ", so this window has it read-only and nothing was saved. Close the file there, then open"
+                        + " it again here to edit.", e);
             }
             if (code.name().startsWith("SQLITE_READONLY")) {
                 return new StoreException("The file " + file + " is read-only, so nothing was saved; make it writable"

@@ -18,7 +18,10 @@ public final class Migrations {
     /** Script names in order; index + 1 is the version each produces. */
     static final List<String> SCRIPTS = List.of("V1__people_and_visits.sql", "V2__ratings_and_blocks.sql",
             "V3__predicted_adult_stature.sql", "V4__backup_record.sql",
-            "V5__block_aims_and_picks.sql");
+            "V5__block_aims_and_picks.sql", "V6__file_meta.sql");
+
+    /** The key in {@code file_meta} naming the Shapetrail that brought the file to its schema. */
+    static final String WRITTEN_BY = "schema_written_by";
 
     private Migrations() {
     }
@@ -34,6 +37,18 @@ public final class Migrations {
         }
     }
 
+    /** The Shapetrail that brought the file to its schema, when the file says (schema 6 on). */
+    static java.util.Optional<String> writtenBy(Connection c) {
+        try (var ps = c.prepareStatement("SELECT value FROM file_meta WHERE key = ?")) {
+            ps.setString(1, WRITTEN_BY);
+            try (ResultSet rs = ps.executeQuery()) {
+                return rs.next() ? java.util.Optional.of(rs.getString(1)) : java.util.Optional.empty();
+            }
+        } catch (SQLException e) {
+            return java.util.Optional.empty(); // no such table: a file from before schema 6, or a hand-made one
+        }
+    }
+
     /** Runs the scripts after {@code from} up to {@code to}, each in its own transaction. */
     static void migrate(Connection c, int from, int to) throws SQLException {
         for (int v = from + 1; v <= to; v++) {
@@ -44,6 +59,13 @@ public final class Migrations {
                     s.executeUpdate(stmt);
                 }
                 s.executeUpdate("PRAGMA user_version = " + v);
+                if (v == to && v >= 6) {
+                    try (var ps = c.prepareStatement("INSERT OR REPLACE INTO file_meta (key, value) VALUES (?, ?)")) {
+                        ps.setString(1, WRITTEN_BY);
+                        ps.setString(2, AppVersion.named());
+                        ps.executeUpdate();
+                    }
+                }
                 c.commit();
             } catch (SQLException | RuntimeException e) {
                 c.rollback();

@@ -87,8 +87,8 @@ class FirstHourGuiTest {
     @Test
     void thePeopleListShowsEveryHeaderAndCellInFullAtTheDefaultSize(FxRobot robot) {
         WaitForAsyncUtils.waitForFxEvents();
-        assertEquals(ShapetrailApp.DEFAULT_WIDTH, stage.getScene().getWidth(), 0.5);
-        assertEquals(1440, ShapetrailApp.DEFAULT_WIDTH, 0.5); // the headless screen is 1600 wide (pom)
+        assertEquals(ShapetrailApp.defaultWidth(), stage.getScene().getWidth(), 0.5);
+        assertEquals(1440, ShapetrailApp.defaultWidth(), 0.5); // the headless screen is 1600 wide (pom)
         TableView<PersonRow> t = people(robot);
         assertEquals(List.of(), cut(t));
         fits(t);

@@ -83,9 +83,24 @@ class PointedFilesTest {
     void aFileOfANewerSchemaIsRefusedWithBothSchemas() throws Exception {
         Path f = sample("newer.sqlite");
         try (var c = DriverManager.getConnection("jdbc:sqlite:" + f); var s = c.createStatement()) {
+            s.executeUpdate("DELETE FROM file_meta"); // a file that does not say which Shapetrail wrote it
             s.executeUpdate("PRAGMA user_version = 99");
         }
-        refused(f, "was written by a newer Shapetrail (schema 99); this version reads up to schema", "people");
+        refused(f, "was written by a newer Shapetrail (schema 99); this is " + org.shapetrail.store.AppVersion.named()
+                + ", which reads files up to schema", "people");
+    }
+
+    @Test
+    void aNewerFileNamesTheVersionThatWroteItAndThisOne() throws Exception {
+        Path f = sample("newer-named.sqlite");
+        try (var c = DriverManager.getConnection("jdbc:sqlite:" + f); var s = c.createStatement()) {
+            // what a later Shapetrail records when it brings a file to its schema (Migrations.WRITTEN_BY)
+            s.executeUpdate("INSERT OR REPLACE INTO file_meta (key, value) VALUES ('schema_written_by', 'Shapetrail 7.2.0')");
+            s.executeUpdate("PRAGMA user_version = 99");
+        }
+        refused(f, "was written by Shapetrail 7.2.0 (schema 99); this is " + org.shapetrail.store.AppVersion.named()
+                + ", which reads files up to schema " + org.shapetrail.store.Migrations.latest()
+                + ". Open it with Shapetrail 7.2.0 or later; the file was not changed.", "people");
     }
 
     @Test

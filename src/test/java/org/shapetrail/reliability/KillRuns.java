@@ -113,7 +113,8 @@ public final class KillRuns {
                 sample(template);
                 try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + template.toAbsolutePath());
                      Statement s = c.createStatement()) {
-                    // as schema 4 left a file: without what version 5 adds
+                    // as schema 4 left a file: without what versions 5 and 6 add
+                    s.executeUpdate("DROP TABLE file_meta");
                     s.executeUpdate("DROP TABLE block_pick");
                     s.executeUpdate("ALTER TABLE training_block DROP COLUMN aim");
                     s.executeUpdate("PRAGMA user_version = 4");
