@@ -22,8 +22,9 @@ public final class ArchiveTraining {
     private ArchiveTraining() {
     }
 
-    public static void main(String[] args) throws IOException {
-        Path jar = Path.of(ArchiveTraining.class.getProtectionDomain().getCodeSource().getLocation().getPath());
+    public static void main(String[] args) throws IOException, java.net.URISyntaxException {
+        // by URI, not by its path text, so that a Windows drive letter reads right
+        Path jar = Path.of(ArchiveTraining.class.getProtectionDomain().getCodeSource().getLocation().toURI());
         int loaded = 0;
         ClassLoader cl = ArchiveTraining.class.getClassLoader();
         try (JarFile j = new JarFile(jar.toFile())) {

@@ -92,6 +92,31 @@ class WorkbenchGuiTest {
     }
 
     @Test
+    void aSecondWindowOnTheSameFileIsReadOnlyAndSaysWhoHasIt(FxRobot robot) throws Exception {
+        Label first = robot.lookup("#read-only-note").queryAs(Label.class);
+        assertFalse(first.isVisible(), "the first window on a file edits it");
+        Stage second = WaitForAsyncUtils.asyncFx(() -> {
+            Stage s = new Stage();
+            ShapetrailApp.show(s, file, new DirectTaskRunner(), Locale.UK, false);
+            return s;
+        }).get(20, TimeUnit.SECONDS);
+        try {
+            WaitForAsyncUtils.waitForFxEvents();
+            Label note = (Label) second.getScene().getRoot().lookup("#read-only-note");
+            assertTrue(note.isVisible());
+            // FileClaim's holder text: the app, this user, this machine, since when
+            String expected = "Read-only: saltmarsh-bay.sqlite is open for editing in Shapetrail ("
+                    + System.getProperty("user.name") + " on ";
+            assertTrue(note.getText().startsWith(expected), note.getText());
+            snapshot(second.getScene().getRoot(), "workbench-read-only.png");
+        } finally {
+            robot.interact(second::close);
+        }
+        // the second window gone, the first still has the file for editing
+        assertFalse(first.isVisible());
+    }
+
+    @Test
     void typingInTheSearchFieldFiltersThePeople(FxRobot robot) {
         robot.clickOn("#search").write("zoe");
         WaitForAsyncUtils.waitForFxEvents();
