@@ -104,8 +104,13 @@ public final class Database implements AutoCloseable {
             }
             if (version < Migrations.latest()) {
                 if (existed) {
-                    backup = abs.resolveSibling(abs.getFileName() + ".before-schema-" + Migrations.latest() + "-"
-                            + LocalDateTime.now().format(DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss")) + ".bak");
+                    String stem = abs.getFileName() + ".before-schema-" + Migrations.latest() + "-"
+                            + LocalDateTime.now().format(DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss"));
+                    backup = abs.resolveSibling(stem + ".bak");
+                    // an upgrade tried twice within a second (one stopped half-way): the earlier copy is kept too
+                    for (int n = 2; Files.exists(backup); n++) {
+                        backup = abs.resolveSibling(stem + "-" + n + ".bak");
+                    }
                     try (Statement s = c.createStatement()) {
                         s.executeUpdate("VACUUM INTO '" + backup.toString().replace("'", "''") + "'");
                     }
