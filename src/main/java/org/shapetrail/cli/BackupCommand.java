@@ -38,7 +38,7 @@ final class BackupCommand implements Callable<Integer> {
                     return 1;
                 }
             }
-            spec.commandLine().getOut().println("Backed up " + d.file() + " to " + target.toAbsolutePath()
+            spec.commandLine().getOut().println("Backed up " + d.name() + " to " + target.toAbsolutePath()
                     + " (content checked).");
         }
         return 0;

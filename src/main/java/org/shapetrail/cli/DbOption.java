@@ -5,25 +5,21 @@ import org.shapetrail.store.DataFolder;
 import org.shapetrail.store.Database;
 import picocli.CommandLine.Option;
 
-/** The {@code --db FILE} option shared by every command that reads or writes a Shapetrail file. */
+/** The {@code --db} option shared by every command that reads or writes a Shapetrail record. */
 final class DbOption {
-    @Option(names = "--db", paramLabel = "FILE",
-            description = "Shapetrail file to use; it must exist (default: the file in your data folder, seeded"
-                    + " with the demo academy on first use).")
-    Path file;
+    @Option(names = "--db", paramLabel = "FILE|URI",
+            description = "Shapetrail file to use, which must exist, or a PostgreSQL server's address"
+                    + " postgresql://USER@HOST:PORT/DATABASE (password from PGPASSWORD or ~/.pgpass). Default: the"
+                    + " file in your data folder, seeded with the demo academy on first use.")
+    String target;
 
-    /** The chosen file, or the default one (copied from the demo database if it does not exist yet). */
-    Path resolve() {
-        if (file != null) {
-            return file;
+    /** Opens the chosen file (which must exist: nothing is created for a mistyped path) or server, or the default file. */
+    Database open() {
+        if (target != null) {
+            return Database.open(target);
         }
         Path f = DataFolder.defaultFile();
         DataFolder.seedWithSample(f);
-        return f;
-    }
-
-    /** Opens the chosen file, which must exist (nothing is created for a mistyped path), or the default one. */
-    Database open() {
-        return Database.openExisting(resolve());
+        return Database.openExisting(f);
     }
 }

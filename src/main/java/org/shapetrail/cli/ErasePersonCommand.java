@@ -41,7 +41,7 @@ final class ErasePersonCommand implements Callable<Integer> {
         try (Database d = db.open()) {
             if (wipeOnly) {
                 d.wipeFreedSpace();
-                out.println("Wiped the free space of " + d.file() + ".");
+                out.println("Wiped the free space of " + d.name() + ".");
                 return 0;
             }
             if (personId == null) {
@@ -51,13 +51,13 @@ final class ErasePersonCommand implements Callable<Integer> {
                     .orElseThrow(() -> new StoreException("There is no person with id " + personId + "."));
             int visits = d.inTransaction(tx -> tx.visits().ofPerson(personId).size());
             if (!yes && !Confirmation.ask(out, "This erases " + p.displayName() + " and " + visits
-                    + " visit(s) with all trials from " + d.file() + ". It cannot be undone.", "ERASE")) {
+                    + " visit(s) with all trials from " + d.name() + ". It cannot be undone.", "ERASE")) {
                 out.println("Nothing was erased.");
                 return 1;
             }
             Database.Erasure e = d.erasePerson(personId);
             out.println("Erased " + p.displayName() + " and " + e.visits() + " visit(s); no trace of them is left in "
-                    + d.file() + " or its journal.");
+                    + d.name() + " or its journal.");
             var held = e.copies().stream().filter(Database.KnownCopy::stillThere).toList();
             if (held.isEmpty()) {
                 out.println("Shapetrail knows of no earlier copy of this file that still exists.");

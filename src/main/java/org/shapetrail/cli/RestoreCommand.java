@@ -29,13 +29,13 @@ final class RestoreCommand implements Callable<Integer> {
     public Integer call() {
         var out = spec.commandLine().getOut();
         try (Database d = db.open()) {
-            if (!yes && !Confirmation.ask(out, "Everything in " + d.file() + " will be replaced by " + source + ".",
+            if (!yes && !Confirmation.ask(out, "Everything in " + d.name() + " will be replaced by " + source + ".",
                     "RESTORE")) {
                 out.println("Nothing was changed.");
                 return 1;
             }
             d.restoreFrom(source);
-            out.println("Restored " + d.file() + " from " + source + ".");
+            out.println("Restored " + d.name() + " from " + source + ".");
         }
         return 0;
     }

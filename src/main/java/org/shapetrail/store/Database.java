@@ -8,6 +8,7 @@ import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.LocalDateTime;
 import java.time.format.DateTimeFormatter;
+import java.util.List;
 import java.util.concurrent.locks.ReentrantLock;
 import org.sqlite.SQLiteConfig;
 import org.sqlite.SQLiteDataSource;
@@ -26,15 +27,127 @@ public final class Database implements AutoCloseable {
     /** Milliseconds a write waits for another process's lock before giving up with {@link FileBusyException}. */
     public static final int BUSY_TIMEOUT_MS = 5000;
 
+    /** The oldest PostgreSQL release Shapetrail is tested on or expects to work with. */
+    public static final int OLDEST_SERVER = 13;
+
     private final Path file;
     private final Connection connection;
     private final ReentrantLock lock = new ReentrantLock();
     private final Path migrationBackup;
+    private final Engine engine;
+    /** The file's path or the server's address, as a person reads it (never a password). */
+    private final String name;
 
     private Database(Path file, Connection connection, Path migrationBackup) {
+        this(file, connection, migrationBackup, Engine.SQLITE, file.toString());
+    }
+
+    private Database(Path file, Connection connection, Path migrationBackup, Engine engine, String name) {
         this.file = file;
         this.connection = connection;
         this.migrationBackup = migrationBackup;
+        this.engine = engine;
+        this.name = name;
+    }
+
+    /**
+     * Opens what a person named with {@code --db}: a server's connection URI
+     * ({@code postgresql://user@host:port/database}), or a file that must already exist.
+     */
+    public static Database open(String target) {
+        return ServerAddress.isServer(target) ? connect(ServerAddress.parse(target), null)
+                : openExisting(Path.of(target));
+    }
+
+    /**
+     * Connects to a shared record on a PostgreSQL server and brings its schema up to date (Flyway, one
+     * transaction, under Flyway's lock so two desks never upgrade at once). The password is
+     * {@code password} when given (the app's prompt), else {@code PGPASSWORD}, else the driver's password
+     * file ({@code ~/.pgpass}).
+     *
+     * @throws StoreException saying what to fix: the address, the server, the password, the database, the
+     *     server's version, or a schema newer than this Shapetrail; nothing is written then
+     */
+    public static Database connect(ServerAddress address, char[] password) {
+        java.util.Properties props = new java.util.Properties();
+        props.setProperty("user", address.user());
+        String envPassword = System.getenv("PGPASSWORD");
+        if (password != null) {
+            props.setProperty("password", new String(password));
+        } else if (envPassword != null && !envPassword.isEmpty()) {
+            props.setProperty("password", envPassword);
+        }
+        props.setProperty("ApplicationName", "Shapetrail " + AppVersion.current());
+        props.setProperty("connectTimeout", "10");
+        String shown = address.toString();
+        Connection c = null;
+        try {
+            c = java.sql.DriverManager.getConnection(address.jdbcUrl(), props);
+            int major = c.getMetaData().getDatabaseMajorVersion();
+            if (major < OLDEST_SERVER) {
+                throw new StoreException("The server at " + address.host() + ":" + address.port() + " runs PostgreSQL "
+                        + c.getMetaData().getDatabaseProductVersion() + "; Shapetrail needs PostgreSQL " + OLDEST_SERVER
+                        + " or later. Ask the server's administrator to upgrade it. Nothing was written.");
+            }
+            int version = Migrations.currentVersion(c);
+            if (version > Migrations.latest()) {
+                throw new StoreException("The record at " + shown + " was written by "
+                        + Migrations.writtenBy(c).orElse("a newer Shapetrail") + " (schema " + version + "); this is "
+                        + AppVersion.named() + ", which reads schemas up to " + Migrations.latest() + ". Install "
+                        + Migrations.writtenBy(c).map(w -> w + " or later").orElse("a newer Shapetrail")
+                        + " on this desk. Nothing was written.");
+            }
+            if (version < Migrations.latest()) {
+                Migrations.migrate(c, version, Migrations.latest());
+            }
+            return new Database(null, c, null, Engine.POSTGRESQL, shown);
+        } catch (SQLException e) {
+            closeQuietly(c);
+            throw translateServer(address, e);
+        } catch (RuntimeException e) {
+            closeQuietly(c);
+            throw e;
+        }
+    }
+
+    /** What went wrong reaching or using a server, said as what to fix (PostgreSQL's SQLSTATE classes). */
+    static StoreException translateServer(ServerAddress a, SQLException e) {
+        String state = e.getSQLState() == null ? "" : e.getSQLState();
+        String where = a.host() + ":" + a.port();
+        if (state.equals("28P01") || state.equals("28000")) {
+            return new StoreException("The server at " + where + " refused the password for " + a.user()
+                    + " (or there is no such user). Check the user name in the address and the password (PGPASSWORD,"
+                    + " ~/.pgpass or the one you typed). Nothing was written.", e);
+        }
+        if (state.equals("3D000")) {
+            return new StoreException("There is no database \"" + a.database() + "\" on the server at " + where
+                    + ". Check its name in the address, or ask the administrator to create it (docs/server.md)."
+                    + " Nothing was written.", e);
+        }
+        if (state.startsWith("08") && e.getMessage() != null && e.getMessage().contains("password")) {
+            return new StoreException("The server at " + where + " asks for a password for " + a.user()
+                    + " and none was given: set PGPASSWORD, add a line to ~/.pgpass, or type it when Shapetrail"
+                    + " asks. Nothing was written.", e);
+        }
+        if (state.startsWith("08")) {
+            return new StoreException("Shapetrail could not reach the server at " + where + " ("
+                    + firstLine(e.getMessage()) + "). Check the host and port in the address, that the server is"
+                    + " running and that this desk may connect to it. Nothing was written.", e);
+        }
+        if (state.equals("42501")) {
+            return new StoreException("The server refused this as beyond what " + a.user() + " may do ("
+                    + firstLine(e.getMessage()) + "). Nothing was changed.", e);
+        }
+        if (state.startsWith("23")) {
+            return new StoreException("That change would break a rule of the record (" + firstLine(e.getMessage())
+                    + "); nothing was changed.", e);
+        }
+        return new StoreException("The record at " + a + " could not be used: " + firstLine(e.getMessage())
+                + ". Nothing was changed.", e);
+    }
+
+    private static String firstLine(String s) {
+        return s == null ? "no detail" : s.lines().findFirst().orElse("").strip();
     }
 
     /** Work done inside one transaction. */
@@ -184,9 +297,27 @@ public final class Database implements AutoCloseable {
         }
     }
 
-    /** The file this database reads and writes. */
+    /** The file this database reads and writes; null for a server. */
     public Path file() {
         return file;
+    }
+
+    /** The file's path or the server's address, as a person reads it (never a password). */
+    public String name() {
+        return name;
+    }
+
+    /** Which engine holds the record. */
+    public Engine engine() {
+        return engine;
+    }
+
+    /** Refuses the file-only operations on a server, saying what serves there instead. */
+    private void fileOnly(String what) {
+        if (engine != Engine.SQLITE) {
+            throw new StoreException("A record on a server is " + what + " with PostgreSQL's own tools (pg_dump and"
+                    + " pg_restore, docs/server.md), not by Shapetrail, which copies files only. Nothing was written.");
+        }
     }
 
     /** The copy written before migrating this file when it was opened, or null if none was needed. */
@@ -210,7 +341,7 @@ public final class Database implements AutoCloseable {
             try {
                 return work.run(new Tx(connection));
             } catch (SQLException e) {
-                throw translate(file.toString(), e);
+                throw translateHere(e);
             } finally {
                 lock.unlock();
             }
@@ -230,7 +361,7 @@ public final class Database implements AutoCloseable {
                 throw e;
             }
         } catch (SQLException e) {
-            throw translate(file.toString(), e);
+            throw translateHere(e);
         } finally {
             try {
                 connection.setAutoCommit(true);
@@ -247,13 +378,14 @@ public final class Database implements AutoCloseable {
      * target is replaced.
      */
     public void backupTo(Path target) {
+        fileOnly("backed up");
         lock.lock();
         try (Statement s = connection.createStatement()) {
             Files.deleteIfExists(target);
             s.executeUpdate("backup to '" + target.toAbsolutePath().toString().replace("'", "''") + "'");
             recordBackup(connection, target.toAbsolutePath(), "backup");
         } catch (SQLException e) {
-            throw translate(file.toString(), e);
+            throw translateHere(e);
         } catch (IOException e) {
             throw new StoreException("Cannot write the backup " + target + ": " + e.getMessage(), e);
         } finally {
@@ -266,6 +398,7 @@ public final class Database implements AutoCloseable {
      * The backup must be a Shapetrail file; it is checked before anything is replaced.
      */
     public void restoreFrom(Path source) {
+        fileOnly("restored");
         if (!Files.isRegularFile(source)) {
             throw new StoreException("The backup " + source + " does not exist.");
         }
@@ -289,7 +422,7 @@ public final class Database implements AutoCloseable {
                 Migrations.migrate(connection, version, Migrations.latest());
             }
         } catch (SQLException e) {
-            throw translate(file.toString(), e);
+            throw translateHere(e);
         } finally {
             lock.unlock();
         }
@@ -367,7 +500,7 @@ public final class Database implements AutoCloseable {
         try {
             wipeFreedSpace();
         } catch (StoreException busy) {
-            throw new StoreException(e.person().displayName() + " is erased, but another program has " + file
+            throw new StoreException(e.person().displayName() + " is erased, but another program has " + name
                     + " open, so its freed space may still hold traces. Close the other program (or Shapetrail"
                     + " window), then run: erase-person --wipe-only", busy);
         }
@@ -383,6 +516,13 @@ public final class Database implements AutoCloseable {
     public void wipeFreedSpace() {
         lock.lock();
         try (Statement s = connection.createStatement()) {
+            if (engine == Engine.POSTGRESQL) {
+                // the erased rows' old versions stay in the tables' pages until they are rewritten
+                for (String table : List.of("trial", "visit_rating", "block_pick", "membership", "visit", "person")) {
+                    s.execute("VACUUM FULL " + table);
+                }
+                return;
+            }
             s.execute("VACUUM");
             try (var rs = s.executeQuery("PRAGMA wal_checkpoint(TRUNCATE)")) {
                 if (rs.next() && (rs.getInt(1) != 0 || rs.getInt(2) != 0 && rs.getInt(2) != rs.getInt(3))) {
@@ -391,7 +531,7 @@ public final class Database implements AutoCloseable {
                 }
             }
         } catch (SQLException e) {
-            throw translate(file.toString(), e);
+            throw translateHere(e);
         } finally {
             lock.unlock();
         }
@@ -399,6 +539,10 @@ public final class Database implements AutoCloseable {
 
     /** {@code PRAGMA integrity_check}: "ok" for a sound file, otherwise SQLite's description. */
     public String integrityCheck() {
+        if (engine == Engine.POSTGRESQL) {
+            throw new StoreException("A server checks its own storage (PostgreSQL's amcheck, run by its administrator);"
+                    + " Shapetrail's integrity check reads files only.");
+        }
         return inTransaction(tx -> {
             try (Statement s = tx.connection().createStatement();
                  var rs = s.executeQuery("PRAGMA integrity_check")) {
@@ -417,10 +561,32 @@ public final class Database implements AutoCloseable {
         try {
             connection.close();
         } catch (SQLException e) {
-            throw translate(file.toString(), e);
+            throw translateHere(e);
         } finally {
             lock.unlock();
         }
+    }
+
+    private StoreException translateHere(SQLException e) {
+        if (engine == Engine.POSTGRESQL) {
+            String state = e.getSQLState() == null ? "" : e.getSQLState();
+            if (state.startsWith("08") || state.equals("57P01")) {
+                return new StoreException("The connection to the server " + name + " was lost ("
+                        + firstLine(e.getMessage()) + "); nothing of this change was saved. Check the network and"
+                        + " try again.", e);
+            }
+            if (state.equals("42501")) {
+                return new StoreException("The server refused this: beyond what your account may do ("
+                        + firstLine(e.getMessage()) + "). Nothing was changed.", e);
+            }
+            if (state.startsWith("23")) {
+                return new StoreException("That change would break a rule of the record (" + firstLine(e.getMessage())
+                        + "); nothing was changed.", e);
+            }
+            return new StoreException("The record at " + name + " could not be used: " + firstLine(e.getMessage())
+                    + ". Nothing was changed.", e);
+        }
+        return translate(file.toString(), e);
     }
 
     static StoreException translate(String file, SQLException e) {

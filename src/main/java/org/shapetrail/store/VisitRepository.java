@@ -77,6 +77,13 @@ public final class VisitRepository {
      * holds the write lock (BEGIN IMMEDIATE), so nobody else can take the next id meanwhile.
      */
     private long nextVisitId() throws SQLException {
+        if (Engine.of(c) == Engine.POSTGRESQL) {
+            // the same guarantee on a server: writers of visits take turns (readers are not held up), and
+            // the id sequence is moved past the ids given here when the write finishes
+            try (Statement s = c.createStatement()) {
+                s.execute("LOCK TABLE visit IN EXCLUSIVE MODE");
+            }
+        }
         try (PreparedStatement max = c.prepareStatement("SELECT coalesce(max(id), 0) FROM visit");
              ResultSet rs = max.executeQuery()) {
             rs.next();
@@ -257,6 +264,11 @@ public final class VisitRepository {
                 throw new StoreException("The bulk write has " + visits + " visit rows for " + all.size()
                         + " visits; nothing was written.");
             }
+            if (visits > 0 && Engine.of(c) == Engine.POSTGRESQL) {
+                try (Statement s = c.createStatement()) {
+                    s.execute("SELECT setval(pg_get_serial_sequence('visit', 'id'), (SELECT max(id) FROM visit))");
+                }
+            }
             try (PreparedStatement fix = c.prepareStatement("UPDATE visit SET trial_count = ? WHERE id = ?")) {
                 for (int i = 0; i < visits; i++) {
                     int expected = all.get(i).trialCount();
@@ -316,11 +328,13 @@ public final class VisitRepository {
 
         TrialWriter(Connection c, BeforeWrite before) throws SQLException {
             this.before = before;
-            many = c.prepareStatement(insert(ROWS));
-            one = c.prepareStatement(insert(1));
+            boolean server = Engine.of(c) == Engine.POSTGRESQL;
+            many = c.prepareStatement(insert(ROWS, server));
+            one = c.prepareStatement(insert(1, server));
         }
 
-        private static String insert(int rows) {
+        /** SQLite names a VALUES list's columns column1…; PostgreSQL is told the same names. */
+        private static String insert(int rows, boolean server) {
             StringBuilder code = new StringBuilder("CASE column2");
             StringBuilder unit = new StringBuilder("CASE column2");
             for (Site s : SITES) {
@@ -333,7 +347,7 @@ public final class VisitRepository {
             for (int i = 1; i < rows; i++) {
                 sql.append(", (?, ?, ?, ?)");
             }
-            return sql.append(')').toString();
+            return sql.append(server ? ") AS v (column1, column2, column3, column4)" : ")").toString();
         }
 
         void addAll(long visitId, List<SiteTrials> trials) throws SQLException {
@@ -538,8 +552,10 @@ public final class VisitRepository {
 
     /** Sets (or replaces) the rater's rating of a visit. */
     public void setRating(VisitRating r) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("INSERT OR REPLACE INTO visit_rating (visit_id, endomorphy,"
-                + " mesomorphy, ectomorphy, rater, method) VALUES (?, ?, ?, ?, ?, ?)")) {
+        try (PreparedStatement ps = c.prepareStatement("INSERT INTO visit_rating (visit_id, endomorphy,"
+                + " mesomorphy, ectomorphy, rater, method) VALUES (?, ?, ?, ?, ?, ?) ON CONFLICT (visit_id) DO UPDATE"
+                + " SET endomorphy = excluded.endomorphy, mesomorphy = excluded.mesomorphy,"
+                + " ectomorphy = excluded.ectomorphy, rater = excluded.rater, method = excluded.method")) {
             ps.setLong(1, r.visitId());
             ps.setDouble(2, r.rating().endomorphy());
             ps.setDouble(3, r.rating().mesomorphy());

@@ -124,11 +124,16 @@ public final class DemoAcademy {
         Files.deleteIfExists(target.resolveSibling(target.getFileName() + "-wal"));
         Files.deleteIfExists(target.resolveSibling(target.getFileName() + "-shm"));
         try (Database db = Database.open(target)) {
-            db.inTransaction(tx -> {
-                build(tx, new Random(SEED + 1));
-                return null;
-            });
+            generateInto(db);
         }
+    }
+
+    /** Writes the demo academy into an open, empty record (a new file, or a server's empty schema). */
+    public static void generateInto(Database db) {
+        db.inTransaction(tx -> {
+            build(tx, new Random(SEED + 1));
+            return null;
+        });
     }
 
     /** The plan alone, without writing anything (same seed, same draws as {@link #generate}). */
