@@ -10,7 +10,8 @@ import picocli.CommandLine.Command;
         subcommands = {RateCommand.class, PeopleCommand.class, TemCommand.class, ChangesCommand.class,
             GrowthCommand.class, BlockReportCommand.class, CompareSquadsCommand.class, LettersCommand.class,
             ImportCommand.class, ExportCommand.class, BackupCommand.class, RestoreCommand.class,
-            ExportPersonCommand.class, ErasePersonCommand.class, BlockCommand.class, CommandLine.HelpCommand.class})
+            ExportPersonCommand.class, ErasePersonCommand.class, BlockCommand.class, TrailCommand.class,
+            AccountCommand.class, CommandLine.HelpCommand.class})
 public final class ShapetrailCli implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;

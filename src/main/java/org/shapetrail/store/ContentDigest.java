@@ -22,6 +22,13 @@ public final class ContentDigest {
             "membership", "person_id, squad_id, joined_on", "measurer", "id", "visit", "id",
             "trial", "visit_id, site, trial_no", "visit_rating", "visit_id", "training_block", "id", "block_pick", "block_id, person_id");
 
+    /**
+     * Bookkeeping columns left out: who entered or changed a row, when, and its version say how the
+     * record came to be, not what it holds (they differ between a file and a server holding the same).
+     */
+    private static final java.util.Set<String> STAMPS = java.util.Set.of("row_version", "entered_by", "changed_by",
+            "changed_at");
+
     private ContentDigest() {
     }
 
@@ -45,6 +52,9 @@ public final class ContentDigest {
                     while (rs.next()) {
                         row.setLength(0);
                         for (int i = 1; i <= n; i++) {
+                            if (STAMPS.contains(meta.getColumnName(i).toLowerCase(java.util.Locale.ROOT))) {
+                                continue;
+                            }
                             Object o = rs.getObject(i);
                             row.append(o == null ? "\u2400" : o.toString()).append('\u241f');
                         }

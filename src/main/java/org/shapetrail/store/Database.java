@@ -37,6 +37,9 @@ public final class Database implements AutoCloseable {
     private final Engine engine;
     /** The file's path or the server's address, as a person reads it (never a password). */
     private final String name;
+    /** A server's address and login properties, for the connection that listens for others' changes. */
+    private ServerAddress server;
+    private java.util.Properties serverLogin;
 
     private Database(Path file, Connection connection, Path migrationBackup) {
         this(file, connection, migrationBackup, Engine.SQLITE, file.toString());
@@ -100,7 +103,10 @@ public final class Database implements AutoCloseable {
             if (version < Migrations.latest()) {
                 Migrations.migrate(c, version, Migrations.latest());
             }
-            return new Database(null, c, null, Engine.POSTGRESQL, shown);
+            Database db = new Database(null, c, null, Engine.POSTGRESQL, shown);
+            db.server = address;
+            db.serverLogin = props;
+            return db;
         } catch (SQLException e) {
             closeQuietly(c);
             throw translateServer(address, e);
@@ -312,6 +318,123 @@ public final class Database implements AutoCloseable {
         return engine;
     }
 
+    /**
+     * What the person at this desk may do: on a file, everything (a file has no accounts); on a server,
+     * the role of their login (the schema's owner counts as an administrator). Empty for a login with
+     * none of the three roles (it may read what it was granted, nothing more).
+     */
+    public java.util.Optional<StaffRole> role() {
+        if (engine == Engine.SQLITE) {
+            return java.util.Optional.of(StaffRole.ADMINISTRATOR);
+        }
+        return inTransaction(tx -> {
+            try (Statement s = tx.connection().createStatement(); var rs = s.executeQuery("SELECT CASE"
+                    + " WHEN (SELECT tableowner FROM pg_tables WHERE schemaname = current_schema() AND tablename = 'person')"
+                    + " = session_user OR pg_has_role(session_user, 'shapetrail_admin', 'MEMBER') THEN 'administrator'"
+                    + " WHEN pg_has_role(session_user, 'shapetrail_coach', 'MEMBER') THEN 'coach'"
+                    + " WHEN pg_has_role(session_user, 'shapetrail_measurer', 'MEMBER') THEN 'measurer' ELSE '' END")) {
+                rs.next();
+                return StaffRole.byWord(rs.getString(1));
+            }
+        });
+    }
+
+    /** The login this desk is connected as on a server; the operating system's user on a file. */
+    public String actor() {
+        if (engine == Engine.SQLITE) {
+            return System.getProperty("user.name", "");
+        }
+        return inTransaction(tx -> {
+            try (Statement s = tx.connection().createStatement(); var rs = s.executeQuery("SELECT session_user")) {
+                rs.next();
+                return rs.getString(1);
+            }
+        });
+    }
+
+    /**
+     * Calls {@code onChange} (on a thread of its own, with the table's name) whenever someone else saves
+     * a change to people, visits, ratings, memberships or blocks of this record; on a server by
+     * PostgreSQL's LISTEN/NOTIFY on a second connection. A file has one writer at a time (FileClaim) and
+     * hears nothing. Close the result to stop listening.
+     */
+    public AutoCloseable listenForChanges(java.util.function.Consumer<String> onChange) {
+        if (engine == Engine.SQLITE) {
+            return () -> { };
+        }
+        Connection listening;
+        String schema;
+        int self = inTransaction(tx -> {
+            try (Statement s = tx.connection().createStatement(); var rs = s.executeQuery("SELECT pg_backend_pid()")) {
+                rs.next();
+                return rs.getInt(1);
+            }
+        });
+        try {
+            listening = java.sql.DriverManager.getConnection(server.jdbcUrl(), serverLogin);
+            try (Statement s = listening.createStatement(); var rs = s.executeQuery("SELECT current_schema()")) {
+                rs.next();
+                schema = rs.getString(1);
+                s.execute("LISTEN shapetrail_change");
+            }
+        } catch (SQLException e) {
+            throw translateServer(server, e);
+        }
+        org.postgresql.PGConnection pg;
+        try {
+            pg = listening.unwrap(org.postgresql.PGConnection.class);
+        } catch (SQLException e) {
+            closeQuietly(listening);
+            throw translateServer(server, e);
+        }
+        java.util.concurrent.atomic.AtomicBoolean open = new java.util.concurrent.atomic.AtomicBoolean(true);
+        Thread t = new Thread(() -> {
+            while (open.get()) {
+                try {
+                    org.postgresql.PGNotification[] got = pg.getNotifications(500);
+                    if (got == null) {
+                        continue;
+                    }
+                    java.util.Set<String> tables = new java.util.LinkedHashSet<>();
+                    for (org.postgresql.PGNotification n : got) {
+                        String[] parts = n.getParameter().split(" ", 2);
+                        if (parts.length == 2 && parts[0].equals(schema) && n.getPID() != self) { // not our own saves
+                            tables.add(parts[1]);
+                        }
+                    }
+                    tables.forEach(onChange);
+                } catch (SQLException lost) {
+                    if (open.get()) {
+                        onChange.accept("");  // the connection dropped: the caller reloads, and the next save says so
+                    }
+                    return;
+                }
+            }
+        }, "shapetrail-change-listener");
+        t.setDaemon(true);
+        t.start();
+        return () -> {
+            open.set(false);
+            t.join(2000);
+            closeQuietly(listening);
+        };
+    }
+
+    /** Work on the staff accounts, in one transaction. */
+    @FunctionalInterface
+    public interface AccountWork<T> {
+        T run(Accounts accounts) throws SQLException;
+    }
+
+    /** Staff accounts, on a server only (the server refuses a login that may not create roles). */
+    public <T> T accounts(AccountWork<T> work) {
+        if (engine == Engine.SQLITE) {
+            throw new StoreException("A file has no accounts: whoever opens it may do everything. Accounts are for a"
+                    + " record on a server (docs/server.md). Nothing was changed.");
+        }
+        return inTransaction(tx -> work.run(new Accounts(tx.connection())));
+    }
+
     /** Refuses the file-only operations on a server, saying what serves there instead. */
     private void fileOnly(String what) {
         if (engine != Engine.SQLITE) {
@@ -490,6 +613,9 @@ public final class Database implements AutoCloseable {
      *     the traces cannot be wiped yet (the rows are erased; {@link #wipeFreedSpace} finishes the work)
      */
     public Erasure erasePerson(long personId) {
+        if (engine == Engine.POSTGRESQL) {
+            return eraseOnServer(personId);
+        }
         Erasure e = inTransaction(tx -> {
             Person p = tx.people().find(personId)
                     .orElseThrow(() -> new StoreException("There is no person with id " + personId + "."));
@@ -508,6 +634,31 @@ public final class Database implements AutoCloseable {
     }
 
     /**
+     * On a server: the server's own erase function (administrators only, refused by the server otherwise)
+     * removes the person's rows and their lines of the audit trail and leaves one line that an erasure
+     * happened; then the tables are rewritten so the rows' old versions leave the server's storage.
+     */
+    private Erasure eraseOnServer(long personId) {
+        Erasure e = inTransaction(tx -> {
+            Person p = tx.people().find(personId)
+                    .orElseThrow(() -> new StoreException("There is no person with id " + personId + "."));
+            int visits = tx.visits().ofPerson(personId).size();
+            try (var ps = tx.connection().prepareStatement("SELECT erase_person(?)")) {
+                ps.setLong(1, personId);
+                ps.executeQuery().close();
+            }
+            return new Erasure(p, visits, java.util.List.of());
+        });
+        try {
+            wipeFreedSpace();
+        } catch (StoreException notOwner) {
+            throw new StoreException(e.person().displayName() + " is erased from " + name + ", but " + notOwner.getMessage(),
+                    notOwner);
+        }
+        return new Erasure(e.person(), e.visits(), knownCopies());
+    }
+
+    /**
      * Rebuilds the file without free pages (VACUUM) and empties the write-ahead log, so nothing deleted
      * can be read from the file's bytes.
      *
@@ -517,8 +668,17 @@ public final class Database implements AutoCloseable {
         lock.lock();
         try (Statement s = connection.createStatement()) {
             if (engine == Engine.POSTGRESQL) {
-                // the erased rows' old versions stay in the tables' pages until they are rewritten
-                for (String table : List.of("trial", "visit_rating", "block_pick", "membership", "visit", "person")) {
+                // the erased rows' old versions stay in the tables' pages until they are rewritten, which
+                // only the tables' owner may do (the server skips the others with a mere warning)
+                try (var rs = s.executeQuery("SELECT tableowner = session_user FROM pg_tables"
+                        + " WHERE schemaname = current_schema() AND tablename = 'person'")) {
+                    if (!rs.next() || !rs.getBoolean(1)) {
+                        throw new StoreException("the old copies of the erased rows stay in the server's storage until"
+                                + " the record's owner runs: shapetrail erase-person --wipe-only (docs/server.md).");
+                    }
+                }
+                for (String table : List.of("trial", "visit_rating", "block_pick", "membership", "visit", "person",
+                        "audit_entry")) {
                     s.execute("VACUUM FULL " + table);
                 }
                 return;

@@ -30,6 +30,11 @@ public final class Tx {
         return new VisitRepository(connection);
     }
 
+    /** The audit trail (written by a server; empty on a file). */
+    public AuditTrail trail() {
+        return new AuditTrail(connection);
+    }
+
     public TrainingBlockRepository blocks() {
         return new TrainingBlockRepository(connection);
     }

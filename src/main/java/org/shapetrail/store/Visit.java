@@ -27,6 +27,10 @@ public record Visit(long id, long personId, LocalDateTime measuredAt, long measu
         return new Visit(newId, personId, measuredAt, measurerId, context, notes, trials);
     }
 
+    public Visit withContext(String newContext) {
+        return new Visit(id, personId, measuredAt, measurerId, newContext, notes, trials);
+    }
+
     /** Number of trial values over all sites. */
     public int trialCount() {
         return trials.stream().mapToInt(t -> t.values().size()).sum();

@@ -433,6 +433,49 @@ public final class VisitRepository {
         return out;
     }
 
+    /** The visit's row stamp as stored now: what an edit form keeps to save against. */
+    public Optional<RowStamp> stamp(long visitId) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT row_version, changed_by, changed_at FROM visit WHERE id = ?")) {
+            ps.setLong(1, visitId);
+            try (ResultSet rs = ps.executeQuery()) {
+                return rs.next() ? Optional.of(new RowStamp(visitId, rs.getInt(1), rs.getString(2), rs.getString(3)))
+                        : Optional.empty();
+            }
+        }
+    }
+
+    /**
+     * Replaces an existing visit's fields and trials when it is still as {@code seen} (nobody saved it
+     * since); otherwise nothing is written and {@link EditConflictException} names who changed it when.
+     */
+    public void update(Visit v, RowStamp seen) throws SQLException {
+        if (seen.visitId() != v.id()) {
+            throw new IllegalArgumentException("stamp of visit " + seen.visitId() + " for visit " + v.id());
+        }
+        // take the row first (a writer's lock on it until commit), then compare: no one can slip in between
+        try (PreparedStatement lock = c.prepareStatement(Engine.of(c) == Engine.POSTGRESQL
+                ? "SELECT id FROM visit WHERE id = ? FOR UPDATE" : "SELECT id FROM visit WHERE id = ?")) {
+            lock.setLong(1, v.id());
+            lock.executeQuery().close();
+        }
+        Optional<RowStamp> now = stamp(v.id());
+        if (now.isEmpty() || now.get().version() != seen.version()) {
+            throw new EditConflictException(seen, now.orElse(null));
+        }
+        update(v);
+    }
+
+    /** Who the change is by, as the stamps record it: the login on a server, the desk's user on a file. */
+    private String actor() throws SQLException {
+        if (Engine.of(c) == Engine.POSTGRESQL) {
+            try (Statement s = c.createStatement(); ResultSet rs = s.executeQuery("SELECT session_user")) {
+                rs.next();
+                return rs.getString(1);
+            }
+        }
+        return System.getProperty("user.name", "");
+    }
+
     /** Replaces an existing visit's fields and trials (checked first; whole or not at all). */
     public void update(Visit v) throws SQLException {
         List<Problem> problems = new ArrayList<>(fieldProblems(v, birthDates().get(v.personId()), LocalDate.now()));
@@ -441,16 +484,19 @@ public final class VisitRepository {
             throw new InvalidVisitException(problems);
         }
         try (PreparedStatement ps = c.prepareStatement("UPDATE visit SET person_id = ?, measured_at = ?,"
-                + " measurer_id = ?, context = ?, notes = ?, trial_count = ? WHERE id = ?")) {
+                + " measurer_id = ?, context = ?, notes = ?, trial_count = ?, row_version = row_version + 1,"
+                + " changed_by = ?, changed_at = ? WHERE id = ?")) {
             ps.setLong(1, v.personId());
             ps.setString(2, v.measuredAt().format(TIME));
             ps.setLong(3, v.measurerId());
             ps.setString(4, v.context());
             ps.setString(5, v.notes());
             ps.setInt(6, v.trialCount());
-            ps.setLong(7, v.id());
+            ps.setString(7, actor());
+            ps.setString(8, java.time.Instant.now().truncatedTo(java.time.temporal.ChronoUnit.SECONDS).toString());
+            ps.setLong(9, v.id());
             if (ps.executeUpdate() != 1) {
-                throw new StoreException("There is no visit with id " + v.id() + ".");
+                throw notChanged(v.id());
             }
         }
         try (PreparedStatement del = c.prepareStatement("DELETE FROM trial WHERE visit_id = ?")) {
@@ -466,8 +512,32 @@ public final class VisitRepository {
     public boolean delete(long visitId) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("DELETE FROM visit WHERE id = ?")) {
             ps.setLong(1, visitId);
-            return ps.executeUpdate() == 1;
+            if (ps.executeUpdate() == 1) {
+                return true;
+            }
         }
+        if (stamp(visitId).isPresent()) {
+            throw notChanged(visitId); // there, but the server's rules hid it from this account's change
+        }
+        return false;
+    }
+
+    /**
+     * Why a change to a visit touched no row: none with that id, or (on a server) a measurer's rule that
+     * they change only the visits they entered.
+     */
+    private StoreException notChanged(long visitId) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT entered_by FROM visit WHERE id = ?")) {
+            ps.setLong(1, visitId);
+            try (ResultSet rs = ps.executeQuery()) {
+                if (rs.next()) {
+                    return new StoreException("The server refused the change: visit " + visitId + " was entered by "
+                            + rs.getString(1) + ", and a measurer may change or delete only the visits they entered."
+                            + " Ask them or an administrator. Nothing was changed.");
+                }
+            }
+        }
+        return new StoreException("There is no visit with id " + visitId + ".");
     }
 
     public Optional<Visit> find(long visitId) throws SQLException {

@@ -113,7 +113,12 @@ public final class KillRuns {
                 sample(template);
                 try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + template.toAbsolutePath());
                      Statement s = c.createStatement()) {
-                    // as schema 4 left a file: without what versions 5 and 6 add
+                    // as schema 4 left a file: without what versions 5 to 8 add, and from before Flyway
+                    s.executeUpdate("DROP TABLE flyway_schema_history");
+                    s.executeUpdate("DROP TABLE audit_entry");
+                    for (String column : List.of("row_version", "entered_by", "changed_by", "changed_at")) {
+                        s.executeUpdate("ALTER TABLE visit DROP COLUMN " + column);
+                    }
                     s.executeUpdate("DROP TABLE file_meta");
                     s.executeUpdate("DROP TABLE block_pick");
                     s.executeUpdate("ALTER TABLE training_block DROP COLUMN aim");

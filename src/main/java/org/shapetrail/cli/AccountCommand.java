@@ -1,0 +1,170 @@
+package org.shapetrail.cli;
+
+import java.io.BufferedReader;
+import java.io.InputStreamReader;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.util.concurrent.Callable;
+import org.shapetrail.store.Accounts;
+import org.shapetrail.store.Database;
+import org.shapetrail.store.StaffRole;
+import org.shapetrail.store.StoreException;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code account}: staff accounts on a server (an administrator's work). */
+@Command(name = "account", mixinStandardHelpOptions = true,
+        description = "Staff accounts on a server: each person logs in as themselves, as a measurer (enters and"
+                + " edits their own visits), a coach (reads everything, makes training blocks, writes letters) or an"
+                + " administrator (people, squads, measurers, accounts, erasure). The server enforces the roles.",
+        subcommands = {AccountCommand.Add.class, AccountCommand.ListAccounts.class, AccountCommand.Role.class,
+            AccountCommand.Remove.class})
+final class AccountCommand implements Runnable {
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    static StaffRole role(String word) {
+        return StaffRole.byWord(word).orElseThrow(() -> new StoreException("There is no role \"" + word
+                + "\": choose measurer, coach or administrator. Nothing was changed."));
+    }
+
+    @Command(name = "add", mixinStandardHelpOptions = true, description = "Make an account with a role.")
+    static final class Add implements Callable<Integer> {
+        @Mixin
+        DbOption db;
+
+        @Parameters(index = "0", paramLabel = "NAME", description = "the login, e.g. ana.ruiz")
+        String name;
+
+        @Option(names = "--role", required = true, paramLabel = "ROLE", description = "measurer, coach or administrator")
+        String role;
+
+        @Option(names = "--password-stdin", description = "read the new password from the first line of standard input"
+                + " (otherwise it is asked for twice, unseen)")
+        boolean passwordStdin;
+
+        @Spec
+        picocli.CommandLine.Model.CommandSpec spec;
+
+        @Override
+        public Integer call() throws Exception {
+            StaffRole r = role(role);
+            char[] password = password(spec.commandLine().getErr());
+            try (Database d = db.open()) {
+                d.accounts(a -> {
+                    a.add(name, r, password);
+                    return null;
+                });
+                spec.commandLine().getOut().println("Made the account " + name + " (" + r.word() + ") on " + d.name()
+                        + ". Give them the password by a safe way; Shapetrail keeps no copy of it.");
+            } finally {
+                java.util.Arrays.fill(password, '\0');
+            }
+            return 0;
+        }
+
+        private char[] password(PrintWriter err) throws java.io.IOException {
+            if (passwordStdin) {
+                String line = new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8)).readLine();
+                if (line == null) {
+                    throw new StoreException("No password came on standard input; nothing was changed.");
+                }
+                return line.toCharArray();
+            }
+            java.io.Console console = System.console();
+            if (console == null) {
+                throw new StoreException("There is no terminal to ask the password on: pass it with --password-stdin."
+                        + " Nothing was changed.");
+            }
+            char[] first = console.readPassword("Password for %s: ", name);
+            char[] again = console.readPassword("The same again: ");
+            if (first == null || !java.util.Arrays.equals(first, again)) {
+                throw new StoreException("The two passwords differ; nothing was changed. Try again.");
+            }
+            return first;
+        }
+    }
+
+    @Command(name = "list", mixinStandardHelpOptions = true, description = "List the accounts and their roles.")
+    static final class ListAccounts implements Callable<Integer> {
+        @Mixin
+        DbOption db;
+
+        @Spec
+        picocli.CommandLine.Model.CommandSpec spec;
+
+        @Override
+        public Integer call() {
+            PrintWriter out = spec.commandLine().getOut();
+            try (Database d = db.open()) {
+                java.util.List<Accounts.Account> all = d.accounts(Accounts::all);
+                out.printf("%-32s %s%n", "account", "role");
+                for (Accounts.Account a : all) {
+                    out.printf("%-32s %s%n", a.name(), a.role().word());
+                }
+            }
+            return 0;
+        }
+    }
+
+    @Command(name = "role", mixinStandardHelpOptions = true, description = "Give an account another role.")
+    static final class Role implements Callable<Integer> {
+        @Mixin
+        DbOption db;
+
+        @Parameters(index = "0", paramLabel = "NAME")
+        String name;
+
+        @Parameters(index = "1", paramLabel = "ROLE", description = "measurer, coach or administrator")
+        String role;
+
+        @Spec
+        picocli.CommandLine.Model.CommandSpec spec;
+
+        @Override
+        public Integer call() {
+            StaffRole r = role(role);
+            try (Database d = db.open()) {
+                d.accounts(a -> {
+                    a.setRole(name, r);
+                    return null;
+                });
+                spec.commandLine().getOut().println(name + " is now a " + r.word() + ".");
+            }
+            return 0;
+        }
+    }
+
+    @Command(name = "remove", mixinStandardHelpOptions = true,
+            description = "End an account. What it entered stays, and the audit trail keeps its name.")
+    static final class Remove implements Callable<Integer> {
+        @Mixin
+        DbOption db;
+
+        @Parameters(index = "0", paramLabel = "NAME")
+        String name;
+
+        @Spec
+        picocli.CommandLine.Model.CommandSpec spec;
+
+        @Override
+        public Integer call() {
+            try (Database d = db.open()) {
+                d.accounts(a -> {
+                    a.remove(name);
+                    return null;
+                });
+                spec.commandLine().getOut().println("The account " + name + " is ended.");
+            }
+            return 0;
+        }
+    }
+}

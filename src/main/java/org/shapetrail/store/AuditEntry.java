@@ -1,0 +1,58 @@
+package org.shapetrail.store;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+
+/**
+ * One line of a server's audit trail: who (the login), when (UTC), what was done to which row, and the
+ * row's values before and after. An erasure leaves a line with no person and no values.
+ */
+public record AuditEntry(long id, String at, String who, String action, String entity, Long personId, Long visitId,
+        Map<String, String> oldValues, Map<String, String> newValues) {
+    /** Bookkeeping columns not worth a reader's attention in a change summary. */
+    private static final java.util.Set<String> QUIET = java.util.Set.of("row_version", "changed_by", "changed_at",
+            "entered_by", "trial_count");
+
+    public AuditEntry {
+        oldValues = oldValues == null ? Map.of() : java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(oldValues));
+        newValues = newValues == null ? Map.of() : java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(newValues));
+    }
+
+    /** What the row is, in words: "visit 12", "trial 12 triceps 2", "rating of visit 12", "person 3". */
+    public String what() {
+        Map<String, String> v = newValues.isEmpty() ? oldValues : newValues;
+        return switch (entity) {
+            case "trial" -> "trial " + v.get("visit_id") + " " + v.get("site") + " #" + v.get("trial_no");
+            case "rating" -> "rating of visit " + v.get("visit_id");
+            case "person" -> action.equals("erasure") ? "a person (erased; nothing of them kept)" : "person " + v.get("id");
+            default -> entity + " " + v.get("id");
+        };
+    }
+
+    /** The fields that differ, as "name: old → new"; for an insert or delete, the row's main values. */
+    public List<String> changes() {
+        List<String> out = new ArrayList<>();
+        if (action.equals("update")) {
+            for (var e : newValues.entrySet()) {
+                String before = oldValues.get(e.getKey());
+                if (!QUIET.contains(e.getKey()) && !Objects.equals(before, e.getValue())) {
+                    out.add(e.getKey() + ": " + shown(before) + " → " + shown(e.getValue()));
+                }
+            }
+            return out;
+        }
+        Map<String, String> v = action.equals("insert") ? newValues : oldValues;
+        for (var e : v.entrySet()) {
+            if (!QUIET.contains(e.getKey()) && !e.getKey().equals("id") && e.getValue() != null && !e.getValue().isEmpty()) {
+                out.add(e.getKey() + " " + shown(e.getValue()));
+            }
+        }
+        return out;
+    }
+
+    private static String shown(String v) {
+        return v == null ? "(none)" : v.isEmpty() ? "(empty)" : v;
+    }
+}
