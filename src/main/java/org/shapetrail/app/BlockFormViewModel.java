@@ -1,6 +1,6 @@
 package org.shapetrail.app;
 
-import java.nio.file.Path;
+import org.shapetrail.store.RecordSource;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -69,7 +69,7 @@ public final class BlockFormViewModel {
         }
     }
 
-    private final Path file;
+    private final RecordSource file;
     private final Loaded loaded;
     private final Squad squad;
     private final TrainingBlock editing;
@@ -83,7 +83,7 @@ public final class BlockFormViewModel {
     final BooleanProperty saving = new SimpleBooleanProperty(false);
 
     public BlockFormViewModel(Loaded loaded, Squad squad, TrainingBlock editing) {
-        this.file = loaded.file();
+        this.file = loaded.source();
         this.loaded = loaded;
         this.squad = Objects.requireNonNull(squad, "squad");
         this.editing = editing;
@@ -247,7 +247,7 @@ public final class BlockFormViewModel {
         TrainingBlock b = block();
         try {
             return Optional.of(OffFxThread.call(saving, () -> {
-                try (Database db = Database.openExisting(file)) {
+                try (Database db = file.open()) {
                     return db.inTransaction(tx -> {
                         if (editing == null) {
                             return tx.blocks().insert(b);

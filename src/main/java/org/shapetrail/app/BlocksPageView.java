@@ -1,5 +1,6 @@
 package org.shapetrail.app;
 
+import org.shapetrail.store.RecordSource;
 import java.util.List;
 import java.util.Optional;
 import javafx.geometry.Insets;
@@ -143,9 +144,9 @@ final class BlocksPageView {
         if (a.showAndWait().orElse(javafx.scene.control.ButtonType.CANCEL) != javafx.scene.control.ButtonType.OK) {
             return;
         }
-        Path file = ctx.loaded().file();
+        RecordSource file = ctx.loaded().source();
         boolean done = ctx.organise(() -> {
-            try (Database db = Database.openExisting(file)) {
+            try (Database db = file.open()) {
                 db.inTransaction(tx -> tx.blocks().delete(b.id()));
             }
             return Optional.empty();
@@ -162,10 +163,10 @@ final class BlocksPageView {
         if (b == null) {
             return;
         }
-        Path file = ctx.loaded().file();
+        RecordSource file = ctx.loaded().source();
         pendingBlock = b.name();
         boolean done = ctx.organise(() -> {
-            try (Database db = Database.openExisting(file)) {
+            try (Database db = file.open()) {
                 db.inTransaction(tx -> tx.blocks().insert(b.withId(0)));
             }
             return Optional.empty();

@@ -1,6 +1,7 @@
 package org.shapetrail.app;
 
 import java.nio.file.Path;
+import org.shapetrail.store.RecordSource;
 import java.util.ArrayList;
 import java.util.List;
 import javafx.beans.property.BooleanProperty;
@@ -44,7 +45,7 @@ public final class ImportWizardViewModel {
 
     public static final List<Choice> CHOICES = choices();
 
-    private final Path database;
+    private final RecordSource database;
     private final Path file;
     private final List<String> headers;
     private final ObservableList<ObjectProperty<Choice>> mapping = FXCollections.observableArrayList();
@@ -56,7 +57,7 @@ public final class ImportWizardViewModel {
     private final ObservableList<String> report = FXCollections.observableArrayList();
     private final BooleanProperty canCommit = new SimpleBooleanProperty(false);
 
-    public ImportWizardViewModel(Path database, Path file) throws java.io.IOException {
+    public ImportWizardViewModel(RecordSource database, Path file) throws java.io.IOException {
         this.database = database;
         this.file = file;
         CsvInput.Format f = CsvInput.detect(file);
@@ -115,7 +116,7 @@ public final class ImportWizardViewModel {
         ImportOptions o = new ImportOptions(decimals.get(), monthFirst.get(), createMissing.get());
         summary.set("Checking " + file.getFileName() + " …");
         runner.run("Checking the file", () -> {
-            try (Database db = Database.openExisting(database)) {
+            try (Database db = database.open()) {
                 return Importer.dryRun(file, Academy.load(db), o, cols);
             }
         }, this::showPlan, t -> summary.set(Errors.describe(t)));
@@ -130,7 +131,7 @@ public final class ImportWizardViewModel {
         canCommit.set(false);
         summary.set("Importing …");
         runner.run("Importing", () -> {
-            try (Database db = Database.openExisting(database)) {
+            try (Database db = database.open()) {
                 return Importer.commit(db, p);
             }
         }, n -> {
@@ -150,7 +151,7 @@ public final class ImportWizardViewModel {
     /** The dry run with the current mapping and options, on the calling thread; nothing is written. */
     public void dryRun() {
         ImportPlan p;
-        try (Database db = Database.openExisting(database)) {
+        try (Database db = database.open()) {
             p = Importer.dryRun(file, Academy.load(db),
                     new ImportOptions(decimals.get(), monthFirst.get(), createMissing.get()), currentColumns());
         }

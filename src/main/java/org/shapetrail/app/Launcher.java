@@ -24,7 +24,7 @@ public final class Launcher {
             PrintWriter err = new PrintWriter(new java.io.OutputStreamWriter(System.err, StandardCharsets.UTF_8));
             System.exit(ShapetrailCli.execute(args, out, err));
         }
-        ShapetrailApp.preload(ShapetrailApp.chooseStartFile(java.util.List.of(args)));
+        ShapetrailApp.preload(ShapetrailApp.chooseStart(java.util.List.of(args)));
         Application.launch(ShapetrailApp.class, args);
     }
 }

@@ -1,6 +1,6 @@
 package org.shapetrail.app;
 
-import java.nio.file.Path;
+import org.shapetrail.store.RecordSource;
 import java.time.LocalDate;
 import java.util.Locale;
 import java.util.Optional;
@@ -18,12 +18,12 @@ final class Organising {
     }
 
     /** The outcome: empty when done, else why nothing was written. */
-    static Optional<String> addMeasurer(Path file, String name, String accreditation) {
+    static Optional<String> addMeasurer(RecordSource file, String name, String accreditation) {
         String n = name == null ? "" : name.strip();
         if (n.isEmpty()) {
             return Optional.of("The measurer needs a name.");
         }
-        try (Database db = Database.openExisting(file)) {
+        try (Database db = file.open()) {
             return db.inTransaction(tx -> {
                 if (tx.measurers().all().stream().anyMatch(m -> same(m.name(), n))) {
                     return Optional.of("There is already a measurer called " + n + " in this file.");
@@ -34,12 +34,12 @@ final class Organising {
         }
     }
 
-    static Optional<String> addSquad(Path file, String name) {
+    static Optional<String> addSquad(RecordSource file, String name) {
         String n = name == null ? "" : name.strip();
         if (n.isEmpty()) {
             return Optional.of("The squad needs a name.");
         }
-        try (Database db = Database.openExisting(file)) {
+        try (Database db = file.open()) {
             return db.inTransaction(tx -> {
                 if (tx.squads().all().stream().anyMatch(s -> same(s.name(), n))) {
                     return Optional.of("There is already a squad called " + n + " in this file.");
@@ -54,14 +54,14 @@ final class Organising {
      * Moves a person to {@code squad} from {@code from}: every membership still open on that day ends the
      * day before (a membership that would only start on or after it is refused, as it would overlap).
      */
-    static Optional<String> moveToSquad(Path file, long personId, Squad squad, LocalDate from) {
+    static Optional<String> moveToSquad(RecordSource file, long personId, Squad squad, LocalDate from) {
         if (squad == null) {
             return Optional.of("Choose the squad the person moves to.");
         }
         if (from == null) {
             return Optional.of("Choose the day the person joins " + squad.name() + ".");
         }
-        try (Database db = Database.openExisting(file)) {
+        try (Database db = file.open()) {
             return db.inTransaction(tx -> {
                 java.util.List<Membership> open = tx.squads().membershipsOf(personId).stream()
                         .filter(m -> m.leftOn() == null || !m.leftOn().isBefore(from)).toList();
@@ -87,11 +87,11 @@ final class Organising {
      * Ends every membership of a person still open on {@code lastDay} with that day, when they leave the
      * academy (or the squads it keeps); their visits stay.
      */
-    static Optional<String> leave(Path file, long personId, LocalDate lastDay) {
+    static Optional<String> leave(RecordSource file, long personId, LocalDate lastDay) {
         if (lastDay == null) {
             return Optional.of("Choose the last day in the squad.");
         }
-        try (Database db = Database.openExisting(file)) {
+        try (Database db = file.open()) {
             return db.inTransaction(tx -> {
                 java.util.List<Membership> open = tx.squads().membershipsOf(personId).stream()
                         .filter(m -> m.leftOn() == null || m.leftOn().isAfter(lastDay)).toList();

@@ -1,6 +1,6 @@
 package org.shapetrail.app;
 
-import java.nio.file.Path;
+import org.shapetrail.store.RecordSource;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
@@ -28,7 +28,7 @@ import org.shapetrail.store.Squad;
  * until there is none.
  */
 public final class PersonFormViewModel {
-    private final Path file;
+    private final RecordSource file;
     private final Locale locale;
     private final Person editing;
     final StringProperty name = new SimpleStringProperty("");
@@ -47,7 +47,7 @@ public final class PersonFormViewModel {
     /** True while a save is being written (the view takes input away meanwhile). */
     final BooleanProperty saving = new SimpleBooleanProperty(false);
 
-    public PersonFormViewModel(Path file, List<Squad> squads, Locale locale, Person editing) {
+    public PersonFormViewModel(RecordSource file, List<Squad> squads, Locale locale, Person editing) {
         this.file = file;
         this.locale = locale;
         this.editing = editing;
@@ -144,7 +144,7 @@ public final class PersonFormViewModel {
         Squad joins = squad.get();
         try {
             return Optional.of(OffFxThread.call(saving, () -> {
-                try (Database db = Database.openExisting(file)) {
+                try (Database db = file.open()) {
                     return db.inTransaction(tx -> {
                         if (editing == null) {
                             Person saved = tx.people().insert(c.person());

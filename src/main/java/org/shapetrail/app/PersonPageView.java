@@ -1,5 +1,6 @@
 package org.shapetrail.app;
 
+import org.shapetrail.store.RecordSource;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayDeque;
@@ -43,6 +44,7 @@ final class PersonPageView {
         pane.onNewVisit(() -> enterVisit(null));
         pane.onEditVisit(this::editVisit);
         pane.onDeleteVisit(this::deleteVisit);
+        pane.onVisitHistory(this::visitHistory);
         pane.undo.setOnAction(e -> undoLast());
         pane.undo.setDisable(true);
         pane.editPerson.setOnAction(e -> ctx.vm.selectedHistory().ifPresent(h -> ctx.personForm(h.person())));
@@ -70,7 +72,8 @@ final class PersonPageView {
     VisitEntryView entryFor(Visit editing) {
         PersonHistory h = ctx.vm.selectedHistory().orElseThrow();
         Loaded l = ctx.loaded();
-        return new VisitEntryView(new VisitEntryViewModel(l.file(), l.builder(), h, ctx.locale, editing), ctx.window());
+        return new VisitEntryView(new VisitEntryViewModel(l.source(), l.builder(), h, ctx.locale, editing), ctx.window())
+                .onReload(ctx.vm::reload);
     }
 
     void enterVisit(Visit editing) {
@@ -86,7 +89,7 @@ final class PersonPageView {
 
     private void editVisit(VisitLine line) {
         stored(line).ifPresent(shown -> {
-            Path file = ctx.loaded().file();
+            RecordSource file = ctx.loaded().source();
             Optional<VisitSnapshot> before;
             try {
                 before = OffFxThread.call(ctx.storing, () -> VisitSnapshot.read(file, shown.id()));
@@ -102,6 +105,46 @@ final class PersonPageView {
         });
     }
 
+    /**
+     * The chosen visit's history: on a server, every line of the audit trail for it (who entered and
+     * changed it and its trials, when, old and new values); on a file, which keeps no trail, its stamps.
+     */
+    private void visitHistory(VisitLine line) {
+        RecordSource file = ctx.loaded().source();
+        String text;
+        try {
+            text = OffFxThread.call(ctx.storing, () -> {
+                try (Database db = file.open()) {
+                    if (db.engine() == org.shapetrail.store.Engine.SQLITE) {
+                        var stamp = db.inTransaction(tx -> tx.visits().stamp(line.visitId()));
+                        return "A file has no accounts and keeps no audit trail (a record on a server does).\n\n"
+                                + stamp.map(st -> st.changedBy().isEmpty() ? "This visit has not been changed since it"
+                                        + " was entered." : "Last changed by " + st.changedBy() + " at "
+                                        + st.changedAt().replace('T', ' ').replace("Z", " UTC") + " (change "
+                                        + (st.version() - 1) + ").").orElse("The visit is no longer in the file.");
+                    }
+                    return org.shapetrail.store.AuditEntry.asText(db.inTransaction(tx -> tx.trail().ofVisit(line.visitId())));
+                }
+            });
+        } catch (RuntimeException e) {
+            ctx.vm.errorProperty().set("The visit's history cannot be read now: " + Errors.describe(e));
+            return;
+        }
+        javafx.scene.control.TextArea area = new javafx.scene.control.TextArea(text);
+        area.setId("visit-history-text");
+        area.setEditable(false);
+        area.setWrapText(false);
+        area.setPrefSize(760, 420);
+        area.setStyle("-fx-font-family: monospace;");
+        Alert a = new Alert(Alert.AlertType.INFORMATION, null, ButtonType.CLOSE);
+        a.setHeaderText("History of the visit of " + line.date());
+        a.setTitle("Visit history");
+        a.getDialogPane().setContent(area);
+        a.initOwner(ctx.window());
+        a.getDialogPane().getStylesheets().addAll(ctx.window().getScene().getStylesheets());
+        a.show();
+    }
+
     private void deleteVisit(VisitLine line) {
         stored(line).ifPresent(v -> {
             Alert a = new Alert(Alert.AlertType.CONFIRMATION, "Delete the visit of " + line.date() + " with all its"
@@ -111,12 +154,12 @@ final class PersonPageView {
             if (a.showAndWait().orElse(ButtonType.CANCEL) != ButtonType.OK) {
                 return;
             }
-            Path file = ctx.loaded().file();
+            RecordSource file = ctx.loaded().source();
             Optional<VisitSnapshot> before;
             try {
                 before = OffFxThread.call(ctx.storing, () -> {
                     Optional<VisitSnapshot> snap = VisitSnapshot.read(file, v.id());
-                    try (Database db = Database.openExisting(file)) {
+                    try (Database db = file.open()) {
                         db.inTransaction(tx -> tx.visits().delete(v.id()));
                     }
                     return snap;
@@ -191,8 +234,8 @@ final class PersonPageView {
         d.getDialogPane().setContent(g);
         d.getDialogPane().getButtonTypes().addAll(ButtonType.CANCEL, ButtonType.OK);
         if (d.showAndWait().orElse(ButtonType.CANCEL) == ButtonType.OK) {
-            ctx.organise(() -> to.getValue() == LEAVES ? Organising.leave(l.file(), p.id(), from.getValue())
-                    : Organising.moveToSquad(l.file(), p.id(), to.getValue(), from.getValue()));
+            ctx.organise(() -> to.getValue() == LEAVES ? Organising.leave(l.source(), p.id(), from.getValue())
+                    : Organising.moveToSquad(l.source(), p.id(), to.getValue(), from.getValue()));
         }
     }
 

@@ -33,6 +33,7 @@ public final class PersonPane extends BorderPane {
     final Button newVisit = new Button("New visit…");
     final Button editVisit = new Button("Edit visit…");
     final Button deleteVisit = new Button("Delete visit…");
+    final Button visitHistory = new Button("Visit history…");
     final Button undo = new Button("Undo last change");
     final Button previewLetter = new Button("Preview letter…");
     final Button editPerson = new Button("Edit person…");
@@ -50,6 +51,9 @@ public final class PersonPane extends BorderPane {
         newVisit.setId("new-visit");
         editVisit.setId("edit-visit");
         deleteVisit.setId("delete-visit");
+        visitHistory.setId("visit-history");
+        visitHistory.setTooltip(new javafx.scene.control.Tooltip("Who entered and changed the chosen visit, when, and"
+                + " what changed (kept by a server)"));
         undo.setId("undo");
         previewLetter.setId("preview-letter");
         editPerson.setId("edit-person");
@@ -67,9 +71,10 @@ public final class PersonPane extends BorderPane {
         visits.setPlaceholder(new Label("No visits yet"));
         editVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
         deleteVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
+        visitHistory.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
         // the buttons wrap onto a second row rather than lose their words when the page is narrow
         javafx.scene.layout.FlowPane actions = new javafx.scene.layout.FlowPane(8, 6, newVisit, editVisit, deleteVisit,
-                undo, new javafx.scene.control.Separator(javafx.geometry.Orientation.VERTICAL), previewLetter, editPerson,
+                undo, visitHistory, new javafx.scene.control.Separator(javafx.geometry.Orientation.VERTICAL), previewLetter, editPerson,
                 moveSquad);
         actions.getChildren().forEach(n -> {
             if (n instanceof Button b) {
@@ -194,6 +199,10 @@ public final class PersonPane extends BorderPane {
 
     void onEditVisit(Consumer<VisitLine> c) {
         editVisit.setOnAction(e -> c.accept(visits.getSelectionModel().getSelectedItem()));
+    }
+
+    void onVisitHistory(Consumer<VisitLine> c) {
+        visitHistory.setOnAction(e -> c.accept(visits.getSelectionModel().getSelectedItem()));
     }
 
     void onDeleteVisit(Consumer<VisitLine> c) {

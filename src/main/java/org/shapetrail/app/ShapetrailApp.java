@@ -2,6 +2,8 @@ package org.shapetrail.app;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import org.shapetrail.store.RecordSource;
+import org.shapetrail.store.ServerAddress;
 import java.util.List;
 import java.util.Locale;
 import java.util.prefs.Preferences;
@@ -18,13 +20,16 @@ public final class ShapetrailApp extends Application {
     private static final Preferences PREFS = Preferences.userRoot().node("org/shapetrail/app");
     /** The start file read while the toolkit starts (see {@link #preload}), or null. */
     private static volatile java.util.concurrent.CompletableFuture<Loaded> preloaded;
-    private static volatile Path preloadedFile;
+    private static volatile RecordSource preloadedFile;
 
     /**
      * Starts reading and computing the start file on a background thread, so that the data is ready when
      * the window is (the JavaFX toolkit takes about a second to start).
      */
-    static void preload(Path file) {
+    static void preload(RecordSource file) {
+        if (file instanceof RecordSource.Server) {
+            return; // a server may need its password asked for first: the window connects
+        }
         preloadedFile = file;
         preloaded = java.util.concurrent.CompletableFuture.supplyAsync(() -> {
             try {
@@ -50,8 +55,8 @@ public final class ShapetrailApp extends Application {
         if (Boolean.getBoolean("shapetrail.startupProbe")) {
             System.out.println("toolkit started after " + java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime() + " ms");
         }
-        Path file = chooseStartFile(getParameters() == null ? List.of() : getParameters().getRaw());
-        show(stage, file, new FxTaskRunner(), Locale.getDefault(Locale.Category.FORMAT), true);
+        RecordSource start = chooseStart(getParameters() == null ? List.of() : getParameters().getRaw());
+        show(stage, start, new FxTaskRunner(), Locale.getDefault(Locale.Category.FORMAT), true);
     }
 
     static void probe(String what) {
@@ -66,22 +71,39 @@ public final class ShapetrailApp extends Application {
      * one opened, else the default (seeded with the demo).
      */
     static Path chooseStartFile(List<String> args) {
+        return chooseStart(args).file().orElse(null);
+    }
+
+    /**
+     * Where the window starts: the file or server named by {@code --db}, a file passed alone (a double click
+     * on an academy file), else the last record opened (a server's address is remembered without its
+     * password), else the default file (seeded with the demo).
+     */
+    static RecordSource chooseStart(List<String> args) {
         Path alone = org.shapetrail.cli.ShapetrailCli.academyFileArgument(args.toArray(String[]::new));
         if (alone != null) {
-            return alone;
+            return RecordSource.of(alone);
         }
         for (int i = 0; i + 1 < args.size(); i++) {
             if (args.get(i).equals("--db")) {
-                return Path.of(args.get(i + 1));
+                String target = args.get(i + 1);
+                return ServerAddress.isServer(target) ? new RecordSource.Server(ServerAddress.parse(target), null)
+                        : RecordSource.of(Path.of(target));
             }
         }
         String last = PREFS.get("lastFile", null);
-        if (last != null && Files.isRegularFile(Path.of(last))) {
-            return Path.of(last);
+        if (last != null && ServerAddress.isServer(last)) {
+            try {
+                return new RecordSource.Server(ServerAddress.parse(last), null);
+            } catch (RuntimeException unreadable) {
+                // an address remembered by hand-edited settings: fall back to the default file
+            }
+        } else if (last != null && Files.isRegularFile(Path.of(last))) {
+            return RecordSource.of(Path.of(last));
         }
         Path f = DataFolder.defaultFile();
         DataFolder.seedWithSample(f);
-        return f;
+        return RecordSource.of(f);
     }
 
     /**
@@ -107,6 +129,11 @@ public final class ShapetrailApp extends Application {
 
     /** Builds and shows the window on {@code file}; tests call this with their own runner and locale. */
     public static Workbench show(Stage stage, Path file, TaskRunner runner, Locale locale, boolean remember) {
+        return show(stage, RecordSource.of(file), runner, locale, remember);
+    }
+
+    /** Builds and shows the window on a file or a server's record. */
+    public static Workbench show(Stage stage, RecordSource file, TaskRunner runner, Locale locale, boolean remember) {
         WorkbenchViewModel vm = new WorkbenchViewModel(runner);
         if (stage.getUserData() instanceof WorkbenchViewModel before) {
             before.letGo(); // the window gets a new workbench: the old one's file is free again
@@ -139,7 +166,8 @@ public final class ShapetrailApp extends Application {
             });
             vm.loadedProperty().addListener((o, a, b) -> {
                 if (b != null) {
-                    PREFS.put("lastFile", b.file().toAbsolutePath().toString());
+                    // a server's address is kept without its password; the password is asked again next time
+                    PREFS.put("lastFile", b.source().remembered());
                 }
             });
         }
@@ -159,7 +187,7 @@ public final class ShapetrailApp extends Application {
         var pre = preloaded;
         if (pre != null && file.equals(preloadedFile)) {
             preloaded = null;
-            vm.statusProperty().set("Opening " + file.getFileName() + " …");
+            vm.statusProperty().set("Opening " + file.title() + " …");
             pre.whenComplete((l, t) -> javafx.application.Platform.runLater(() -> {
                 probe("preload done");
                 if (l != null) {

@@ -39,6 +39,13 @@ public final class VisitEntryView {
     private final Stage stage = new Stage();
     private final List<TextField> order = new ArrayList<>();
     private Visit saved;
+    private Runnable onReload;
+
+    /** What "Close and reload the visits" does after a refused save (the workbench reloads the record). */
+    public VisitEntryView onReload(Runnable r) {
+        this.onReload = r;
+        return this;
+    }
 
     public VisitEntryView(VisitEntryViewModel vm, Window owner) {
         this.vm = vm;
@@ -162,9 +169,20 @@ public final class VisitEntryView {
         save.setOnAction(e -> save());
         Button cancel = new Button("Close without saving");
         cancel.setOnAction(e -> stage.close());
+        // after a save refused because someone else saved this visit meanwhile: close and show theirs
+        Button reload = new Button("Close and reload the visits");
+        reload.setId("reload-after-conflict");
+        reload.visibleProperty().bind(vm.reloadOfferedProperty());
+        reload.managedProperty().bind(vm.reloadOfferedProperty());
+        reload.setOnAction(e -> {
+            stage.close();
+            if (onReload != null) {
+                onReload.run();
+            }
+        });
         Label hint = new Label("Enter moves to the next trial · Ctrl+S saves · Esc closes");
         hint.getStyleClass().add("hint");
-        HBox buttons = new HBox(8, save, cancel, hint);
+        HBox buttons = new HBox(8, save, cancel, reload, hint);
 
         context.setOnAction(e -> order.get(0).requestFocus());
         VBox body = new VBox(10, who, head, confirm, grid, raterBox, live, verdict, new Label("To put right before saving:"),

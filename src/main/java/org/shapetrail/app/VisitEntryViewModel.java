@@ -1,6 +1,6 @@
 package org.shapetrail.app;
 
-import java.nio.file.Path;
+import org.shapetrail.store.RecordSource;
 import java.time.LocalDate;
 import java.time.LocalDateTime;
 import java.time.LocalTime;
@@ -89,11 +89,14 @@ public final class VisitEntryViewModel {
     }
 
     private final Person person;
-    private final Path file;
+    private final RecordSource file;
     private final HistoryBuilder builder;
     private final PersonHistory history;
     private final Locale locale;
     private final Visit editing;
+    /** The edited visit as it was stored when the form opened: the save is refused if someone saved it since. */
+    private final org.shapetrail.store.RowStamp seen;
+    private final javafx.beans.property.BooleanProperty reloadOffered = new javafx.beans.property.SimpleBooleanProperty(false);
     private final List<SiteFields> fields = new ArrayList<>();
     private final ObjectProperty<LocalDate> date = new SimpleObjectProperty<>(LocalDate.now());
     private final ObjectProperty<Measurer> measurer = new SimpleObjectProperty<>();
@@ -119,13 +122,14 @@ public final class VisitEntryViewModel {
     /**
      * @param editing the visit being edited, or null for a new one
      */
-    public VisitEntryViewModel(Path file, HistoryBuilder builder, PersonHistory history, Locale locale, Visit editing) {
+    public VisitEntryViewModel(RecordSource file, HistoryBuilder builder, PersonHistory history, Locale locale, Visit editing) {
         this.person = history.person();
         this.file = file;
         this.builder = builder;
         this.history = history;
         this.locale = locale;
         this.editing = editing;
+        this.seen = editing == null ? null : stampOf(file, editing.id());
         measurers.setAll(builder.academy().measurers());
         if (!measurers.isEmpty()) {
             measurer.set(measurers.get(0));
@@ -336,13 +340,17 @@ public final class VisitEntryViewModel {
         RatingMethod method = raterMethod.get();
         try {
             Visit saved = OffFxThread.call(saving, () -> {
-                try (Database db = Database.openExisting(file)) {
+                try (Database db = file.open()) {
                     return db.inTransaction(tx -> {
                         Visit s;
                         if (editing == null) {
                             s = tx.visits().insert(v);
                         } else {
-                            tx.visits().update(v);
+                            if (seen != null) {
+                                tx.visits().update(v, seen);
+                            } else {
+                                tx.visits().update(v);
+                            }
                             s = v;
                         }
                         if (rater != null) {
@@ -357,10 +365,30 @@ public final class VisitEntryViewModel {
             problems.setAll(e.problems().stream().map(Problem::message).toList());
             canSave.set(false);
             return Optional.empty();
+        } catch (org.shapetrail.store.EditConflictException e) {
+            // someone else saved this visit since the form opened: nothing is overwritten; what was typed stays
+            problems.setAll(List.of(e.getMessage()));
+            reloadOffered.set(true);
+            canSave.set(false);
+            return Optional.empty();
         } catch (RuntimeException e) {
             problems.setAll(List.of(Errors.describe(e)));
             return Optional.empty();
         }
+    }
+
+    /** The stored stamp of a visit, or null when it cannot be read now (the save then checks nothing more). */
+    private static org.shapetrail.store.RowStamp stampOf(RecordSource source, long visitId) {
+        try (Database db = source.open()) {
+            return db.inTransaction(tx -> tx.visits().stamp(visitId)).orElse(null);
+        } catch (RuntimeException unreadable) {
+            return null;
+        }
+    }
+
+    /** True once a save was refused because someone else saved the visit meanwhile: the view offers a reload. */
+    public javafx.beans.property.ReadOnlyBooleanProperty reloadOfferedProperty() {
+        return reloadOffered;
     }
 
     /** True while a save is being written (the view takes input away meanwhile). */

@@ -1,6 +1,6 @@
 package org.shapetrail.app;
 
-import java.nio.file.Path;
+import org.shapetrail.store.RecordSource;
 import java.util.Optional;
 import org.shapetrail.store.Database;
 import org.shapetrail.store.Visit;
@@ -14,8 +14,8 @@ import org.shapetrail.store.VisitRating;
  */
 record VisitSnapshot(Visit visit, VisitRating rating) {
     /** The stored visit {@code visitId} with its rating, read in one transaction. */
-    static Optional<VisitSnapshot> read(Path file, long visitId) {
-        try (Database db = Database.openExisting(file)) {
+    static Optional<VisitSnapshot> read(RecordSource file, long visitId) {
+        try (Database db = file.open()) {
             return db.inTransaction(tx -> {
                 Optional<Visit> v = tx.visits().find(visitId);
                 return v.isEmpty() ? Optional.<VisitSnapshot>empty()
@@ -25,8 +25,8 @@ record VisitSnapshot(Visit visit, VisitRating rating) {
     }
 
     /** Undoes an edit: the visit gets back its fields, trials and rating (or none), under the same id. */
-    void restoreEdited(Path file) {
-        try (Database db = Database.openExisting(file)) {
+    void restoreEdited(RecordSource file) {
+        try (Database db = file.open()) {
             db.inTransaction(tx -> {
                 tx.visits().update(visit);
                 if (rating == null) {
@@ -40,8 +40,8 @@ record VisitSnapshot(Visit visit, VisitRating rating) {
     }
 
     /** Undoes a deletion: the visit is saved again (under a new id) with its rating. */
-    Visit restoreDeleted(Path file) {
-        try (Database db = Database.openExisting(file)) {
+    Visit restoreDeleted(RecordSource file) {
+        try (Database db = file.open()) {
             return db.inTransaction(tx -> {
                 Visit back = tx.visits().insert(visit.withId(0));
                 if (rating != null) {

@@ -68,12 +68,26 @@ public final class Workbench {
         javafx.scene.control.Tooltip where = new javafx.scene.control.Tooltip();
         file.setTooltip(where);
         ctx.vm.loadedProperty().addListener((o, a, b) -> {
-            file.setText(b == null ? "" : b.file().getFileName().toString());
-            where.setText(b == null ? "" : b.file().toAbsolutePath().toString());
+            file.setText(b == null ? "" : b.source().title() + (b.account().isEmpty() ? "" : " · " + b.account()));
+            where.setText(b == null ? "" : b.source().name());
+            if (b != null && b.source() instanceof org.shapetrail.store.RecordSource.Server s) {
+                ServerConnectDialog.remember(s.address());
+            }
+            fitToRole(b);
         });
         Button open = new Button("Open file…");
         open.setId("open-file");
         open.setOnAction(e -> chooseFile());
+        Button connect = new Button("Connect to a server…");
+        connect.setId("connect-server");
+        connect.setOnAction(e -> connectToServer(null, null));
+        ctx.vm.passwordWantedProperty().addListener((o, a, server) -> {
+            if (server != null) {
+                javafx.application.Platform.runLater(() -> connectToServer(server.address().toString(),
+                        "The server at " + server.address().host() + " needs your password for "
+                                + server.address().user() + " (or the one given was refused)."));
+            }
+        });
         Button create = new Button("New file…");
         create.setId("new-file");
         create.setOnAction(e -> chooseNewFile());
@@ -98,11 +112,44 @@ public final class Workbench {
         about.setOnAction(e -> about());
         javafx.scene.control.MenuButton help = new javafx.scene.control.MenuButton("Help", null, sample, about);
         help.setId("help-menu");
-        HBox bar = new HBox(12, title, file, gap, bring, create, open, help, dark);
+        HBox bar = new HBox(12, title, file, gap, bring, create, open, connect, help, dark);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.getStyleClass().add("app-header");
         bar.setPadding(new Insets(10, 14, 10, 14));
         return bar;
+    }
+
+    /** Opens the dialog and, when the person connects, opens the server's record in this window. */
+    private void connectToServer(String address, String why) {
+        ServerConnectDialog.ask(ctx.window(), address, why).ifPresent(ctx.vm::open);
+    }
+
+    /**
+     * Shows only what the account may do: a coach enters no visits and organises nothing, a measurer
+     * organises nothing and makes no blocks (the server refuses these anyway; the buttons would only
+     * mislead). On a file everything is there.
+     */
+    private void fitToRole(Loaded l) {
+        boolean visits = l == null || l.entersVisits();
+        boolean blocksToo = l == null || l.managesBlocks();
+        boolean admin = l == null || l.administers();
+        java.util.Map<String, Boolean> allowed = new java.util.LinkedHashMap<>();
+        for (String id : new String[] {"new-visit", "edit-visit", "delete-visit", "undo"}) {
+            allowed.put(id, visits);
+        }
+        for (String id : new String[] {"new-block", "edit-block", "delete-block", "undo-block"}) {
+            allowed.put(id, blocksToo);
+        }
+        for (String id : new String[] {"new-person", "edit-person", "move-squad", "add-measurer", "new-squad",
+            "import-file"}) {
+            allowed.put(id, admin);
+        }
+        javafx.application.Platform.runLater(() -> allowed.forEach((id, yes) -> {
+            for (javafx.scene.Node n : root.lookupAll("#" + id)) {
+                n.setVisible(yes);
+                n.setManaged(yes);
+            }
+        }));
     }
 
     /** Shown only while another window has this file for editing (FileClaim). */
@@ -165,6 +212,7 @@ public final class Workbench {
         } else if (t == settingsTab && !(settingsTab.getContent() instanceof VBox)) {
             settingsTab.setContent(new SettingsPageView(ctx).root());
         }
+        fitToRole(ctx.loaded()); // the page may have been built just now
     }
 
     private Parent footer() {
@@ -224,7 +272,7 @@ public final class Workbench {
             return;
         }
         try {
-            new ImportWizardView(new ImportWizardViewModel(l.file(), f.toPath()), ctx.vm.runner(), ctx.window(),
+            new ImportWizardView(new ImportWizardViewModel(l.source(), f.toPath()), ctx.vm.runner(), ctx.window(),
                     ctx.vm::reload).show();
         } catch (java.io.IOException | RuntimeException e) {
             ctx.vm.errorProperty().set("The file " + f.getName() + " cannot be read: " + Errors.describe(e));

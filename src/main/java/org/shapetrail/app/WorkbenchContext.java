@@ -50,7 +50,7 @@ final class WorkbenchContext {
     }
 
     /** Asks for one name, then makes the organising change off the FX thread; a refusal is shown as it is. */
-    void askAndOrganise(String title, String prompt, BiFunction<Path, String, Optional<String>> change) {
+    void askAndOrganise(String title, String prompt, BiFunction<org.shapetrail.store.RecordSource, String, Optional<String>> change) {
         Loaded l = loaded();
         if (l == null) {
             return;
@@ -59,7 +59,7 @@ final class WorkbenchContext {
         d.setTitle(title);
         d.setHeaderText(prompt);
         d.initOwner(window());
-        d.showAndWait().ifPresent(name -> organise(() -> change.apply(l.file(), name)));
+        d.showAndWait().ifPresent(name -> organise(() -> change.apply(l.source(), name)));
     }
 
     /**
@@ -89,7 +89,7 @@ final class WorkbenchContext {
         if (l == null) {
             return;
         }
-        PersonFormView.show(new PersonFormViewModel(l.file(), l.builder().academy().squads(), locale, editing),
+        PersonFormView.show(new PersonFormViewModel(l.source(), l.builder().academy().squads(), locale, editing),
                 window()).ifPresent(p -> vm.reload());
     }
 }

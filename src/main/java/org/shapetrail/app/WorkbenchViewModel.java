@@ -1,6 +1,8 @@
 package org.shapetrail.app;
 
 import java.nio.file.Path;
+import org.shapetrail.store.RecordSource;
+import org.shapetrail.store.StaffRole;
 import java.text.Normalizer;
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -53,6 +55,9 @@ public final class WorkbenchViewModel {
     private org.shapetrail.store.FileClaim claim;
     private Path unclaimed;
     private AnalysisSettings settings = AnalysisSettings.standard();
+    private final ObjectProperty<RecordSource.Server> passwordWanted = new SimpleObjectProperty<>();
+    private AutoCloseable listening;
+    private RecordSource listeningTo;
 
     public WorkbenchViewModel(TaskRunner runner) {
         this.runner = runner;
@@ -66,11 +71,21 @@ public final class WorkbenchViewModel {
 
     /** Opens a file in the background, replacing the current one when done. */
     public void open(Path file) {
+        open(RecordSource.of(file));
+    }
+
+    /** Opens a file or a server's record in the background, replacing the current one when done. */
+    public void open(RecordSource source) {
         error.set("");
-        claimFor(file);
-        status.set("Opening " + file.getFileName() + " …");
+        claimFor(source);
+        status.set("Opening " + source.title() + " …");
         AnalysisSettings s = settings;
-        runner.run("Opening " + file.getFileName(), progress -> load(file, s, progress), this::show, t -> {
+        passwordWanted.set(null);
+        runner.run("Opening " + source.title(), progress -> load(source, s, progress), this::show, t -> {
+            if (source instanceof RecordSource.Server server && t.getMessage() != null
+                    && t.getMessage().contains("password")) {
+                passwordWanted.set(server); // the window asks for it (and for the address again)
+            }
             status.set("");
             error.set(Errors.describe(t));
         });
@@ -92,15 +107,20 @@ public final class WorkbenchViewModel {
             try (Database db = Database.open(file)) {
                 db.schemaVersion(); // created and brought to the current schema
             }
-            return load(file, s, progress);
+            return load(RecordSource.of(file), s, progress);
         }, this::show, t -> error.set(Errors.describe(t)));
     }
 
     /** Reads and computes a whole file (runs off the FX thread). */
-    static Loaded load(Path file, AnalysisSettings s, TaskRunner.Progress progress) throws InterruptedException {
+    static Loaded load(RecordSource source, AnalysisSettings s, TaskRunner.Progress progress)
+            throws InterruptedException {
         Academy academy;
-        try (Database db = Database.openExisting(file)) {
+        java.util.Optional<StaffRole> role;
+        String actor;
+        try (Database db = source.open()) {
             academy = Academy.load(db);
+            role = db.role();
+            actor = db.actor();
         }
         HistoryBuilder b = HistoryBuilder.of(academy, s);
         Map<Long, PersonHistory> histories = new LinkedHashMap<>();
@@ -113,7 +133,7 @@ public final class WorkbenchViewModel {
             histories.put(p.id(), b.history(p));
             progress.update(++i, n, "Computing " + i + " of " + n);
         }
-        return new Loaded(file, b, histories);
+        return new Loaded(source, b, histories, role, actor);
     }
 
     /** Recomputes everything with new settings (cancellable). */
@@ -121,7 +141,7 @@ public final class WorkbenchViewModel {
         settings = s;
         Loaded l = loaded.get();
         if (l != null) {
-            runner.run("Recomputing", progress -> load(l.file(), s, progress), this::show, t -> {
+            runner.run("Recomputing", progress -> load(l.source(), s, progress), this::show, t -> {
                 status.set(t instanceof InterruptedException ? "Recomputing was cancelled; the earlier results stay."
                         : "");
                 if (!(t instanceof InterruptedException)) {
@@ -135,7 +155,7 @@ public final class WorkbenchViewModel {
     public void reload() {
         Loaded l = loaded.get();
         if (l != null) {
-            open(l.file());
+            open(l.source());
         }
     }
 
@@ -144,6 +164,15 @@ public final class WorkbenchViewModel {
      * has it (FileClaim). Asked again on every open and reload, so the file becomes editable here once the
      * other window lets go.
      */
+    void claimFor(RecordSource source) {
+        if (source.file().isEmpty()) {
+            releaseFile(); // a server keeps its own order among writers (row versions, the server's rules)
+            return;
+        }
+        stopListening();
+        claimFor(source.file().get());
+    }
+
     void claimFor(Path file) {
         Path abs = file.toAbsolutePath().normalize();
         if (claim != null && claim.database().equals(abs)) {
@@ -165,6 +194,12 @@ public final class WorkbenchViewModel {
 
     /** Gives up this window's claim on its file (it opens another, or closes). */
     public void letGo() {
+        stopListening();
+        releaseFile();
+    }
+
+    /** Gives up the claim on a file (the window now shows a server's record, or another file). */
+    private void releaseFile() {
         if (claim != null) {
             claim.close();
             claim = null;
@@ -176,13 +211,61 @@ public final class WorkbenchViewModel {
         readOnlyNote.set("");
     }
 
+    /**
+     * The server whose connection failed for want of a (right) password: the window asks for one. Null
+     * otherwise.
+     */
+    public ObjectProperty<RecordSource.Server> passwordWantedProperty() {
+        return passwordWanted;
+    }
+
+    /**
+     * For a record on a server: hears of saves made at other desks and reloads (keeping the selection),
+     * so the open pages show them without a restart. Nothing for a file.
+     */
+    private void listenTo(Loaded l) {
+        if (listening != null && l.source().equals(listeningTo)) {
+            return;
+        }
+        stopListening();
+        if (l.source() instanceof RecordSource.Server) {
+            try (Database db = l.source().open()) {
+                listening = db.listenForChanges(table -> javafx.application.Platform.runLater(() -> {
+                    if (table.isEmpty()) {
+                        error.set("The connection to " + l.source().title() + " was lost; saves will say so."
+                                + " Reopen it with Connect to a server….");
+                    } else {
+                        status.set("Changes saved at another desk: reloading …");
+                        reload();
+                    }
+                }));
+                listeningTo = l.source();
+            } catch (RuntimeException e) {
+                error.set("Changes saved at other desks will not show until you reload: " + Errors.describe(e));
+            }
+        }
+    }
+
+    private void stopListening() {
+        if (listening != null) {
+            try {
+                listening.close();
+            } catch (Exception ignored) {
+                // the listener's connection is gone already
+            }
+            listening = null;
+            listeningTo = null;
+        }
+    }
+
     /** Empty, or the sentence saying this window has the file read-only and why. */
     public StringProperty readOnlyNoteProperty() {
         return readOnlyNote;
     }
 
     void show(Loaded l) {
-        claimFor(l.file());
+        claimFor(l.source());
+        listenTo(l);
         loaded.set(l);
         Academy a = l.builder().academy();
         List<String> names = new ArrayList<>();
@@ -193,7 +276,7 @@ public final class WorkbenchViewModel {
             squad.set(ALL_SQUADS);
         }
         fillRows();
-        status.set(l.file().getFileName() + ": " + a.people().size() + " people, " + a.visits().size() + " visits");
+        status.set(l.source().title() + ": " + a.people().size() + " people, " + a.visits().size() + " visits");
     }
 
     /** Every person's line for the period chosen, filtered; the selection is kept. */

@@ -68,17 +68,7 @@ final class TrailCommand implements Callable<Integer> {
                 }
                 return 0;
             }
-            if (lines.isEmpty()) {
-                out.println("Nothing recorded.");
-                return 0;
-            }
-            for (AuditEntry e : lines) {
-                out.printf("%s  %-16s %-7s %s%n", e.at().replace('T', ' ').replace("Z", " UTC"), e.who(), e.action(),
-                        e.what());
-                for (String c : e.changes()) {
-                    out.println("      " + c);
-                }
-            }
+            out.print(AuditEntry.asText(lines));
         }
         return 0;
     }

@@ -44,12 +44,33 @@ public record AuditEntry(long id, String at, String who, String action, String e
             return out;
         }
         Map<String, String> v = action.equals("insert") ? newValues : oldValues;
+        if (entity.equals("trial")) {
+            return v.isEmpty() ? out : List.of(v.get("value") + " " + v.get("unit")); // the rest is in what()
+        }
         for (var e : v.entrySet()) {
             if (!QUIET.contains(e.getKey()) && !e.getKey().equals("id") && e.getValue() != null && !e.getValue().isEmpty()) {
                 out.add(e.getKey() + " " + shown(e.getValue()));
             }
         }
         return out;
+    }
+
+    /** The lines as a person reads them: one per change, its values indented below. */
+    public static String asText(List<AuditEntry> lines) {
+        if (lines.isEmpty()) {
+            return "Nothing recorded.\n";
+        }
+        StringBuilder sb = new StringBuilder();
+        for (AuditEntry e : lines) {
+            List<String> changes = e.changes();
+            boolean inline = e.entity().equals("trial") && changes.size() == 1; // a trial's reading fits its line
+            sb.append(String.format("%s  %-16s %-7s %s%s%n", e.at().replace('T', ' ').replace("Z", " UTC"), e.who(),
+                    e.action(), e.what(), inline ? ": " + changes.get(0) : ""));
+            for (String c : inline ? List.<String>of() : changes) {
+                sb.append("      ").append(c).append(System.lineSeparator());
+            }
+        }
+        return sb.toString();
     }
 
     private static String shown(String v) {

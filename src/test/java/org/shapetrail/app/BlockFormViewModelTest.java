@@ -1,5 +1,6 @@
 package org.shapetrail.app;
 
+import org.shapetrail.store.RecordSource;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -32,7 +33,7 @@ class BlockFormViewModelTest {
     void open() throws Exception {
         file = dir.resolve("demo.sqlite");
         DemoAcademy.generate(file);
-        loaded = WorkbenchViewModel.load(file, AnalysisSettings.standard(), new TaskRunner.Progress() {
+        loaded = WorkbenchViewModel.load(RecordSource.of(file), AnalysisSettings.standard(), new TaskRunner.Progress() {
             @Override
             public void update(double done, double total, String message) {
             }

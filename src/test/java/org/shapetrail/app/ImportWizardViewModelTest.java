@@ -1,5 +1,6 @@
 package org.shapetrail.app;
 
+import org.shapetrail.store.RecordSource;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -23,7 +24,7 @@ class ImportWizardViewModelTest {
         Path csv = dir.resolve("sheet.csv");
         Files.writeString(csv, "Name,DOB,Sex,Date,Tester,Height (cm),Shoe size\n"
                 + "Ada Pelling,2010-03-04,F,2024-01-10,Ada Quarrington,150.2,36\n");
-        ImportWizardViewModel vm = new ImportWizardViewModel(db, csv);
+        ImportWizardViewModel vm = new ImportWizardViewModel(RecordSource.of(db), csv);
         assertEquals(Column.Role.NAME, vm.mapping().get(0).get().role());
         assertEquals(Site.STATURE, vm.mapping().get(5).get().site());
         assertEquals(Column.Role.IGNORED, vm.mapping().get(6).get().role());

@@ -1,5 +1,6 @@
 package org.shapetrail.app;
 
+import org.shapetrail.store.RecordSource;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -24,7 +25,7 @@ class PersonFormViewModelTest {
         try (Database db = Database.open(f)) {
             squad = db.inTransaction(tx -> tx.squads().insert("Rowing juniors"));
         }
-        PersonFormViewModel vm = new PersonFormViewModel(f, List.of(squad), Locale.UK, null);
+        PersonFormViewModel vm = new PersonFormViewModel(RecordSource.of(f), List.of(squad), Locale.UK, null);
         assertEquals(List.of("Enter the person's name.", "Choose the sex recorded for the growth equations.",
                 "Enter the date of birth."), vm.problems);
         vm.name.set("Ada Pelling");

@@ -1,5 +1,6 @@
 package org.shapetrail.app;
 
+import org.shapetrail.store.RecordSource;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -39,7 +40,7 @@ class VisitEntryViewModelTest {
     }
 
     VisitEntryViewModel form(Locale locale) {
-        VisitEntryViewModel vm = new VisitEntryViewModel(file, builder, history, locale, null);
+        VisitEntryViewModel vm = new VisitEntryViewModel(RecordSource.of(file), builder, history, locale, null);
         vm.dateProperty().set(LocalDate.of(2026, 6, 1));
         return vm;
     }

@@ -1,5 +1,6 @@
 package org.shapetrail.app;
 
+import org.shapetrail.store.RecordSource;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 
@@ -53,7 +54,7 @@ class VisitSnapshotTest {
         Path file = demoWithRating();
         long id = firstVisit(file);
         String before = digest(file);
-        VisitSnapshot snap = VisitSnapshot.read(file, id).orElseThrow();
+        VisitSnapshot snap = VisitSnapshot.read(RecordSource.of(file), id).orElseThrow();
         try (Database db = Database.open(file)) {
             db.inTransaction(tx -> {
                 Visit v = tx.visits().find(id).orElseThrow();
@@ -64,7 +65,7 @@ class VisitSnapshotTest {
             });
         }
         assertNotEquals(before, digest(file));
-        snap.restoreEdited(file);
+        snap.restoreEdited(RecordSource.of(file));
         assertEquals(before, digest(file));
     }
 
@@ -72,11 +73,11 @@ class VisitSnapshotTest {
     void undoingADeletionBringsBackTheVisitWithItsRating() throws Exception {
         Path file = demoWithRating();
         long id = firstVisit(file);
-        VisitSnapshot snap = VisitSnapshot.read(file, id).orElseThrow();
+        VisitSnapshot snap = VisitSnapshot.read(RecordSource.of(file), id).orElseThrow();
         try (Database db = Database.open(file)) {
             db.inTransaction(tx -> tx.visits().delete(id));
         }
-        Visit back = snap.restoreDeleted(file);
+        Visit back = snap.restoreDeleted(RecordSource.of(file));
         try (Database db = Database.open(file)) {
             Visit stored = db.inTransaction(tx -> tx.visits().find(back.id())).orElseThrow();
             assertEquals(snap.visit().trials(), stored.trials());

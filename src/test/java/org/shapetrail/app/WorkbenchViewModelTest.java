@@ -30,13 +30,13 @@ class WorkbenchViewModelTest {
         vm.createAndOpen(fresh);
         assertEquals("", vm.errorProperty().get());
         assertEquals(0, vm.rows().size());
-        assertEquals(fresh, vm.loadedProperty().get().file());
+        assertEquals(fresh, vm.loadedProperty().get().source().file().orElseThrow());
         Path demo = dir.resolve("demo.sqlite");
         long size = java.nio.file.Files.size(demo);
         vm.createAndOpen(demo);
         assertEquals("The file demo.sqlite already exists; choose a new name, or open it with Open file….",
                 vm.errorProperty().get());
-        assertEquals(fresh, vm.loadedProperty().get().file(), "the open file stays open");
+        assertEquals(fresh, vm.loadedProperty().get().source().file().orElseThrow(), "the open file stays open");
         assertEquals(size, java.nio.file.Files.size(demo));
     }
 
