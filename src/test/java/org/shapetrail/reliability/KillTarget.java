@@ -26,6 +26,10 @@ public final class KillTarget {
 
     public static void main(String[] args) throws Exception {
         Operation op = Operation.valueOf(args[0]);
+        if (org.shapetrail.store.ServerAddress.isServer(args[1])) {
+            onServer(op, args);
+            return;
+        }
         Path file = Path.of(args[1]);
         if (op == Operation.MIGRATION) {
             say("ready");
@@ -43,6 +47,20 @@ public final class KillTarget {
                 case ERASE -> db.erasePerson(1);
                 case RESTORE -> db.restoreFrom(Path.of(args[2]));
                 default -> throw new IllegalStateException(op.toString());
+            }
+            say("done " + (System.nanoTime() - t0) / 1_000_000);
+        }
+    }
+
+    /** The same operations on a record on a server (import and visit save; the others are the file's own). */
+    private static void onServer(Operation op, String[] args) throws Exception {
+        try (Database db = Database.open(args[1])) {
+            say("ready");
+            long t0 = System.nanoTime();
+            switch (op) {
+                case IMPORT -> Importer.importFile(db, Path.of(args[2]), new ImportOptions(null, false, true), null);
+                case VISIT_SAVE -> db.inTransaction(tx -> tx.visits().insert(visitOf(tx.measurers().all().get(0).id())));
+                default -> throw new IllegalStateException(op + " is not run on a server");
             }
             say("done " + (System.nanoTime() - t0) / 1_000_000);
         }

@@ -154,6 +154,40 @@ class EngineParityServerTest {
                 + ", which reads schemas up to " + Migrations.latest() + ". Install Shapetrail 7.2.0 or later"), m);
     }
 
+    @Test
+    void aConnectionLostMidSaveSavesNothingAndSaysSo() throws Exception {
+        String uri = TestServer.freshSchema("lost");
+        int before;
+        try (Database s = Database.open(uri)) {
+            DemoAcademy.generateInto(s);
+            before = s.inTransaction(tx -> tx.visits().count());
+        }
+        Database s = Database.open(uri);
+        int pid = s.inTransaction(tx -> {
+            try (Statement st = tx.connection().createStatement(); ResultSet rs = st.executeQuery("SELECT pg_backend_pid()")) {
+                rs.next();
+                return rs.getInt(1);
+            }
+        });
+        java.time.LocalDateTime when = java.time.LocalDateTime.of(2026, 10, 20, 9, 0);
+        StoreException e = assertThrows(StoreException.class, () -> s.inTransaction(tx -> {
+            long measurer = tx.measurers().all().get(0).id();
+            tx.visits().insert(new Visit(0, 2, when, measurer, "half saved?", "", Fixtures.fullTrials()));
+            // the network drops (here: the server ends the connection) before the save is committed
+            try (Connection admin = TestServer.admin(); Statement st = admin.createStatement()) {
+                st.execute("SELECT pg_terminate_backend(" + pid + ")");
+            }
+            tx.visits().insert(new Visit(0, 2, when.plusHours(1), measurer, "half saved?", "", Fixtures.fullTrials()));
+            return null;
+        }));
+        assertTrue(e.getMessage().startsWith("The connection to the server " + s.name() + " was lost ("), e.getMessage());
+        assertTrue(e.getMessage().contains("nothing of this change was saved"), e.getMessage());
+        try (Database again = Database.open(uri)) {
+            int after = again.inTransaction(tx -> tx.visits().count());
+            assertEquals(before, after, "no visit of the lost save is there");
+        }
+    }
+
     static String message(org.junit.jupiter.api.function.Executable e) {
         return assertThrows(StoreException.class, e).getMessage();
     }
