@@ -112,7 +112,7 @@ public final class WorkbenchViewModel {
     }
 
     /** Reads and computes a whole file (runs off the FX thread). */
-    static Loaded load(RecordSource source, AnalysisSettings s, TaskRunner.Progress progress)
+    public static Loaded load(RecordSource source, AnalysisSettings s, TaskRunner.Progress progress)
             throws InterruptedException {
         Academy academy;
         java.util.Optional<StaffRole> role;

@@ -24,7 +24,7 @@ public record AuditEntry(long id, String at, String who, String action, String e
     public String what() {
         Map<String, String> v = newValues.isEmpty() ? oldValues : newValues;
         return switch (entity) {
-            case "trial" -> "trial " + v.get("visit_id") + " " + v.get("site") + " #" + v.get("trial_no");
+            case "trial" -> "trials of visit " + visitId;
             case "rating" -> "rating of visit " + v.get("visit_id");
             case "person" -> action.equals("erasure") ? "a person (erased; nothing of them kept)" : "person " + v.get("id");
             default -> entity + " " + v.get("id");
@@ -41,14 +41,22 @@ public record AuditEntry(long id, String at, String who, String action, String e
                     out.add(e.getKey() + ": " + shown(before) + " → " + shown(e.getValue()));
                 }
             }
+            for (var e : oldValues.entrySet()) {
+                if (!QUIET.contains(e.getKey()) && !newValues.containsKey(e.getKey())) {
+                    out.add(e.getKey() + ": " + shown(e.getValue()) + " → (none)");
+                }
+            }
             return out;
         }
         Map<String, String> v = action.equals("insert") ? newValues : oldValues;
         if (entity.equals("trial")) {
-            return v.isEmpty() ? out : List.of(v.get("value") + " " + v.get("unit")); // the rest is in what()
+            // one line per visit: every reading, "site #trial value unit", in the site's order of the form
+            v.forEach((k, val) -> out.add(k + " " + val));
+            return out;
         }
         for (var e : v.entrySet()) {
-            if (!QUIET.contains(e.getKey()) && !e.getKey().equals("id") && e.getValue() != null && !e.getValue().isEmpty()) {
+            if (!QUIET.contains(e.getKey()) && !e.getKey().equals("id") && e.getValue() != null
+                    && !e.getValue().isEmpty()) {
                 out.add(e.getKey() + " " + shown(e.getValue()));
             }
         }
@@ -62,11 +70,9 @@ public record AuditEntry(long id, String at, String who, String action, String e
         }
         StringBuilder sb = new StringBuilder();
         for (AuditEntry e : lines) {
-            List<String> changes = e.changes();
-            boolean inline = e.entity().equals("trial") && changes.size() == 1; // a trial's reading fits its line
-            sb.append(String.format("%s  %-16s %-7s %s%s%n", e.at().replace('T', ' ').replace("Z", " UTC"), e.who(),
-                    e.action(), e.what(), inline ? ": " + changes.get(0) : ""));
-            for (String c : inline ? List.<String>of() : changes) {
+            sb.append(String.format("%s  %-16s %-7s %s%n", e.at().replace('T', ' ').replace("Z", " UTC"), e.who(),
+                    e.action(), e.what()));
+            for (String c : e.changes()) {
                 sb.append("      ").append(c).append(System.lineSeparator());
             }
         }
