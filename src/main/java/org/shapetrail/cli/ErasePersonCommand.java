@@ -56,6 +56,13 @@ final class ErasePersonCommand implements Callable<Integer> {
                 return 1;
             }
             Database.Erasure e = d.erasePerson(personId);
+            if (d.engine() == org.shapetrail.store.Engine.POSTGRESQL) {
+                out.println("Erased " + p.displayName() + " and " + e.visits() + " visit(s) from " + d.name()
+                        + ", with their lines of the audit trail (one line records that an erasure happened), and"
+                        + " rewrote the tables. The server's write-ahead log, its archives and replicas, and dumps made"
+                        + " before may still hold them (docs/server.md).");
+                return 0;
+            }
             out.println("Erased " + p.displayName() + " and " + e.visits() + " visit(s); no trace of them is left in "
                     + d.name() + " or its journal.");
             var held = e.copies().stream().filter(Database.KnownCopy::stillThere).toList();

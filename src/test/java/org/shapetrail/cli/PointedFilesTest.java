@@ -138,4 +138,17 @@ class PointedFilesTest {
             assertArrayEquals(before, Files.readAllBytes(current), backup.getFileName() + ": the current file is unchanged");
         }
     }
+
+    @Test
+    void aFileHasNoAccountsAndNoTrailAndSaysSo() throws Exception {
+        Path f = sample("no-accounts.sqlite");
+        byte[] before = Files.readAllBytes(f);
+        String[] trail = run("trail", "--person", "1", "--db", f.toString());
+        assertEquals("1", trail[0]);
+        assertTrue(trail[2].startsWith("A file has no accounts and keeps no audit trail"), trail[2]);
+        String[] list = run("account", "list", "--db", f.toString());
+        assertEquals("2", list[0]);
+        assertTrue(list[2].startsWith("A file has no accounts: whoever opens it may do everything."), list[2]);
+        assertTrue(java.util.Arrays.equals(before, Files.readAllBytes(f)), "the file is untouched");
+    }
 }
