@@ -72,6 +72,23 @@ final class PersonFormView {
         g.addRow(r++, new Label("Father's stature (cm, optional)"), father);
         g.addRow(r++, new Label("Mother's stature (cm, optional)"), mother);
         g.addRow(r++, new Label("Predicted adult stature (cm, optional)"), predicted);
+        javafx.scene.control.ComboBox<String> language = new javafx.scene.control.ComboBox<>(
+                javafx.collections.FXCollections.observableArrayList(org.shapetrail.store.Person.LETTER_LANGUAGES));
+        language.setId("letter-language");
+        language.setConverter(new javafx.util.StringConverter<>() {
+            @Override
+            public String toString(String code) {
+                return code == null || code.isEmpty() ? "as the academy writes (English)"
+                        : org.shapetrail.i18n.Messages.get(java.util.Locale.forLanguageTag(code), "letter.language");
+            }
+
+            @Override
+            public String fromString(String s) {
+                return s;
+            }
+        });
+        language.valueProperty().bindBidirectional(vm.letterLanguage);
+        g.addRow(r++, new Label("Letters in"), language);
         if (!vm.isEdit()) {
             g.addRow(r++, new Label("Joins squad (from today)"), squad);
         }

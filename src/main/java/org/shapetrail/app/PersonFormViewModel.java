@@ -37,6 +37,8 @@ public final class PersonFormViewModel {
     final StringProperty father = new SimpleStringProperty("");
     final StringProperty mother = new SimpleStringProperty("");
     final StringProperty predicted = new SimpleStringProperty("");
+    /** The language of the person's letters: "" for the desk's, or en, es, pt (a family may read another). */
+    final StringProperty letterLanguage = new SimpleStringProperty("");
     final BooleanProperty consentMeasurement = new SimpleBooleanProperty(false);
     final BooleanProperty consentPhotographs = new SimpleBooleanProperty(false);
     final BooleanProperty consentSharing = new SimpleBooleanProperty(false);
@@ -59,6 +61,7 @@ public final class PersonFormViewModel {
             father.set(text(editing.fatherStatureCm()));
             mother.set(text(editing.motherStatureCm()));
             predicted.set(text(editing.predictedAdultStatureCm()));
+            letterLanguage.set(editing.letterLanguage());
             consentMeasurement.set(editing.consent().measurement());
             consentPhotographs.set(editing.consent().photographs());
             consentSharing.set(editing.consent().shareWithParent());
@@ -130,7 +133,7 @@ public final class PersonFormViewModel {
         }
         Consent c = new Consent(consentMeasurement.get(), consentPhotographs.get(), consentSharing.get());
         Person person = new Person(editing == null ? 0 : editing.id(), name.get().strip(), sex.get(), birth.get(), f, m,
-                editing == null ? "" : editing.notes(), c, p);
+                editing == null ? "" : editing.notes(), c, p, letterLanguage.get() == null ? "" : letterLanguage.get());
         return new Checked(person, out);
     }
 

@@ -55,6 +55,10 @@ final class LettersCommand implements Callable<Integer> {
     @Option(names = "--skinfolds-for-under-16", description = "also describe skinfold thickness for juniors under 16")
     boolean skinfolds;
 
+    @Option(names = "--lang", paramLabel = "en|es|pt", description = "write every letter in this language (default:"
+            + " each person's letter language, else English)")
+    String lang;
+
     @picocli.CommandLine.Mixin
     OverwriteOption overwrite;
 
@@ -71,8 +75,15 @@ final class LettersCommand implements Callable<Integer> {
             b = HistoryBuilder.of(a, AnalysisSettings.standard());
             people.addAll(who.histories(a, b, to));
         }
+        if (lang != null && !org.shapetrail.i18n.Messages.LANGUAGES.contains(lang)) {
+            throw new org.shapetrail.ShapetrailException("There is no letter language \"" + lang + "\": choose en, es or"
+                    + " pt. Nothing was written.");
+        }
         LetterComposer c = new LetterComposer(b, new LetterSettings(academy, sender, role, contact, from, to, skinfolds),
                 Locale.UK);
+        if (lang != null) {
+            c = c.allIn(org.shapetrail.i18n.Messages.localeFor(lang, Locale.UK));
+        }
         var result = LetterBatch.write(c, people, out, overwrite.overwrite, OverwriteOption.HOW, (done, total) -> {
             o.printf("\rLetters: %d of %d", done, total);
             o.flush();

@@ -8,11 +8,15 @@ import org.shapetrail.chart.ChartModel;
  * the chart of the period (or null), and the cautions at the foot.
  */
 public record Letter(String recipientName, List<String> heading, List<Section> sections, List<List<String>> table,
-                     ChartModel chart, List<String> cautions) {
-    /** A titled run of paragraphs. */
-    public record Section(String title, List<String> paragraphs) {
+                     ChartModel chart, List<String> cautions, java.util.Locale language) {
+    /** A titled run of paragraphs; the chart, when there is one, follows the section that says so. */
+    public record Section(String title, List<String> paragraphs, boolean chartAfter) {
         public Section {
             paragraphs = List.copyOf(paragraphs);
+        }
+
+        public Section(String title, List<String> paragraphs) {
+            this(title, paragraphs, false);
         }
     }
 

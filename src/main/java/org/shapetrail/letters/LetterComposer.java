@@ -14,6 +14,7 @@ import org.shapetrail.chart.SomatochartBuilder;
 import org.shapetrail.growth.MaturityEstimate;
 import org.shapetrail.growth.MaturityStatus;
 import org.shapetrail.history.HistoryBuilder;
+import org.shapetrail.i18n.Messages;
 import org.shapetrail.history.PersonHistory;
 import org.shapetrail.history.VisitResult;
 import org.shapetrail.measure.Site;
@@ -32,28 +33,59 @@ public final class LetterComposer {
     /** Age below which skinfold thickness is left out unless the sender asks for it. */
     public static final double SKINFOLD_AGE = 16;
 
-    public static final List<String> CAUTIONS = List.of(
-            "This letter is not a medical or nutritional assessment.",
-            "Children grow at different rates; estimates of growth stage can be out by about half a year either way.",
-            "Questions go to the club's qualified practitioner named above or to your family doctor.",
-            "Local safeguarding and data-protection rules apply to these records.");
+    /** The keys' part for the ratings, by component index (endo, meso, ecto). */
+    private static final List<String> COMPONENT_KEYS = List.of("endo", "meso", "ecto");
+
+    /** The cautions at the foot of every letter, in English (see {@link #cautions(Locale)}). */
+    public static final List<String> CAUTIONS = cautions(Locale.ENGLISH);
+
+    /** The cautions at the foot of every letter, in a language. */
+    public static List<String> cautions(Locale language) {
+        return List.of(Messages.get(language, "letter.caution.medical"), Messages.get(language, "letter.caution.growth"),
+                Messages.get(language, "letter.caution.questions"), Messages.get(language, "letter.caution.rules"));
+    }
 
     private final HistoryBuilder builder;
     /** Histories of block members, computed once per composer (a squad's letters share them). */
     private final java.util.Map<Long, PersonHistory> histories = new java.util.concurrent.ConcurrentHashMap<>();
     private final LetterSettings settings;
-    private final Locale locale;
-    private final DateTimeFormatter dates;
+    /** The desk's locale: the language of a letter whose person has none of their own. */
+    private final Locale deskLocale;
+    /** The letter being composed: its language (the person's, else the desk's), numbers and dates. */
+    private Locale locale;
+    private DateTimeFormatter dates;
+
+    /** True when every letter is in the desk's language, whatever the person's (the letters command's --lang). */
+    private final boolean oneLanguage;
 
     public LetterComposer(HistoryBuilder builder, LetterSettings settings, Locale locale) {
+        this(builder, settings, locale, false);
+    }
+
+    private LetterComposer(HistoryBuilder builder, LetterSettings settings, Locale locale, boolean oneLanguage) {
         this.builder = builder;
         this.settings = settings;
-        this.locale = locale;
-        this.dates = DateTimeFormatter.ofLocalizedDate(FormatStyle.LONG).withLocale(locale);
+        this.deskLocale = locale;
+        this.oneLanguage = oneLanguage;
+        use(locale);
+    }
+
+    /** A composer that writes every letter in {@code language}, whatever language the people's letters are set to. */
+    public LetterComposer allIn(Locale language) {
+        return new LetterComposer(builder, settings, language, true);
+    }
+
+    private void use(Locale l) {
+        this.locale = l;
+        this.dates = DateTimeFormatter.ofLocalizedDate(FormatStyle.LONG).withLocale(l);
     }
 
     private String n(double v, int d) {
         return String.format(locale, "%." + d + "f", v);
+    }
+
+    private String t(String key, Object... args) {
+        return Messages.get(locale, key, args);
     }
 
     private boolean inPeriod(VisitResult r) {
@@ -61,7 +93,12 @@ public final class LetterComposer {
         return !d.isBefore(settings.from()) && !d.isAfter(settings.to());
     }
 
-    public Letter compose(PersonHistory h) {
+    /**
+     * Composes the letter in the person's letter language (a family may read another language than the
+     * staff), else in the desk's. Not for use by two threads at once.
+     */
+    public synchronized Letter compose(PersonHistory h) {
+        use(oneLanguage ? deskLocale : Messages.localeFor(h.person().letterLanguage(), deskLocale));
         var p = h.person();
         String first = p.displayName().split(" ")[0];
         List<VisitResult> visits = h.visits().stream().filter(this::inPeriod).toList();
@@ -69,43 +106,38 @@ public final class LetterComposer {
                 : visits.get(visits.size() - 1).ageYears();
         boolean junior = age < ADULT_AGE;
         boolean skinfolds = age >= SKINFOLD_AGE || settings.skinfoldsForUnder16();
-        List<String> heading = List.of(settings.academy(), "Growth and body shape: progress letter",
-                p.displayName() + " · " + settings.from().format(dates) + " to " + settings.to().format(dates));
+        List<String> heading = List.of(settings.academy(), t("letter.title"), t("letter.heading.period",
+                p.displayName(), settings.from().format(dates), settings.to().format(dates)));
         List<Letter.Section> sections = new ArrayList<>();
-        String dear = junior ? "Dear parent or guardian of " + p.displayName() + "," : "Dear " + p.displayName() + ",";
-        sections.add(new Letter.Section("", List.of(dear, "This letter summarises the measurements " + first
-                + " had with us between " + settings.from().format(dates) + " and " + settings.to().format(dates)
-                + ". It describes growth and body shape, compared with " + first + "'s own earlier measurements."
-                + " It is not a judgement of health, fitness, talent or worth.")));
+        String dear = junior ? t("letter.dear.parent", p.displayName()) : t("letter.dear.adult", p.displayName());
+        sections.add(new Letter.Section("", List.of(dear, t("letter.intro", first, settings.from().format(dates),
+                settings.to().format(dates)))));
         if (visits.isEmpty()) {
-            sections.add(new Letter.Section("Measurements", List.of("There were no measurements in this period, so"
-                    + " there is nothing new to report. If you expected some, please ask us.")));
+            sections.add(new Letter.Section(t("letter.section.measurements"), List.of(t("letter.none"))));
         } else {
             sections.add(growth(h, visits, first));
             sections.add(shape(h, visits, first, skinfolds));
         }
         blockSection(h, first, skinfolds).ifPresent(sections::add);
-        sections.add(new Letter.Section("What these numbers mean, and what they do not", List.of(
-                "They describe body shape and size on the days of measuring. Shape changes with growth, training and"
-                        + " time; there is no right or wrong shape for a sport or for a person.",
-                "Every measurement has a small error. We call a change larger than the measurer's repeat error"
-                        + " would usually give only when the measurer's own repeat measurements would produce a change"
-                        + " that large by chance in fewer than 1 case in 20.")));
-        String who = settings.sender() + (settings.senderRole().isBlank() ? "" : " (" + settings.senderRole() + ")");
-        sections.add(new Letter.Section("Questions", List.of("Please contact " + who + ", " + settings.contact()
-                + ", or your family doctor.")));
+        sections.add(new Letter.Section(t("letter.section.meaning"), List.of(t("letter.meaning.shape"),
+                t("letter.meaning.error"))));
+        String who = settings.senderRole().isBlank() ? settings.sender()
+                : t("letter.sender.role", settings.sender(), settings.senderRole());
+        sections.add(new Letter.Section(t("letter.section.questions"), List.of(t("letter.questions", who,
+                settings.contact()))));
         List<List<String>> table = new ArrayList<>();
         if (!visits.isEmpty()) {
-            List<String> head = new ArrayList<>(List.of("Date", "Age", "Height (cm)", "Muscle & bone",
-                    "Slenderness"));
+            List<String> head = new ArrayList<>(List.of(t("letter.table.date"), t("letter.table.age"),
+                    t("letter.table.height"), t("letter.table.meso"), t("letter.table.ecto")));
             if (skinfolds) {
-                head.add("Skinfold rating");
+                head.add(t("letter.table.endo"));
             }
             table.add(head);
             for (VisitResult r : visits) {
                 List<String> row = new ArrayList<>();
-                row.add(r.visit().measuredAt().toLocalDate().format(DateTimeFormatter.ofLocalizedDate(FormatStyle.MEDIUM)
-                        .withLocale(locale)));
+                // English "17 Sept 2025"; elsewhere the short numeric form, which fits the column ("17/09/2025")
+                row.add(r.visit().measuredAt().toLocalDate().format(DateTimeFormatter.ofLocalizedDate(
+                        locale.getLanguage().equals("en") ? FormatStyle.MEDIUM : FormatStyle.SHORT).withLocale(locale)));
                 row.add(n(r.ageYears(), 1));
                 row.add(r.value(Site.STATURE).map(x -> n(x, 1)).orElse("—"));
                 row.add(r.rating().map(s -> n(s.rating().mesomorphy(), 1)).orElse("—"));
@@ -117,7 +149,8 @@ public final class LetterComposer {
             }
         }
         // the somatochart's positions depend on all three components, so it is shown only with skinfolds included
-        return new Letter(p.displayName(), heading, sections, table, skinfolds ? chart(h, visits) : null, CAUTIONS);
+        return new Letter(p.displayName(), heading, sections, table, skinfolds ? chart(h, visits) : null,
+                cautions(locale), locale);
     }
 
     private Letter.Section growth(PersonHistory h, List<VisitResult> visits, String first) {
@@ -126,94 +159,85 @@ public final class LetterComposer {
         boolean adult = !visits.isEmpty() && visits.get(visits.size() - 1).ageYears() >= ADULT_AGE;
         if (adult && !st.isEmpty()) {
             VisitResult last = st.get(st.size() - 1);
-            ps.add("Height was " + n(last.value(Site.STATURE).get(), 1) + " cm on " + last.visit().measuredAt()
-                    .toLocalDate().format(dates) + ".");
+            ps.add(t("letter.height.once", n(last.value(Site.STATURE).get(), 1),
+                    last.visit().measuredAt().toLocalDate().format(dates)));
         } else if (st.size() >= 2) {
             VisitResult a = st.get(0);
             VisitResult b = st.get(st.size() - 1);
             double gain = b.value(Site.STATURE).get() - a.value(Site.STATURE).get();
             long days = ChronoUnit.DAYS.between(a.visit().measuredAt(), b.visit().measuredAt());
-            String pace = days >= 90 ? ", about " + n(gain / (days / 365.25), 1) + " cm a year" : "";
-            ps.add("Height went from " + n(a.value(Site.STATURE).get(), 1) + " cm (" + a.visit().measuredAt()
-                    .toLocalDate().format(dates) + ") to " + n(b.value(Site.STATURE).get(), 1) + " cm ("
-                    + b.visit().measuredAt().toLocalDate().format(dates) + "): " + (gain >= 0 ? "a gain of " : "a change of ")
-                    + n(gain, 1) + " cm in " + Math.round(days / 30.44) + " months" + pace + ".");
+            String pace = days >= 90 ? t("letter.height.pace", n(gain / (days / 365.25), 1)) : "";
+            ps.add(t(gain >= 0 ? "letter.height.gain" : "letter.height.change", n(a.value(Site.STATURE).get(), 1),
+                    a.visit().measuredAt().toLocalDate().format(dates), n(b.value(Site.STATURE).get(), 1),
+                    b.visit().measuredAt().toLocalDate().format(dates), n(gain, 1), Math.round(days / 30.44), pace));
         } else if (st.size() == 1) {
-            ps.add("Height was " + n(st.get(0).value(Site.STATURE).get(), 1) + " cm on "
-                    + st.get(0).visit().measuredAt().toLocalDate().format(dates) + ".");
+            ps.add(t("letter.height.once", n(st.get(0).value(Site.STATURE).get(), 1),
+                    st.get(0).visit().measuredAt().toLocalDate().format(dates)));
         }
         MaturityEstimate m = h.growth().maturity();
         if (m != null && st.size() > 0) {
-            String stage = m.status() == MaturityStatus.PRE_PHV ? "before the fastest years of growth"
-                    : m.status() == MaturityStatus.CIRCA_PHV ? "around the time of fastest growth (the growth spurt)"
-                    : "past the fastest years of growth";
-            ps.add("Estimated stage of growth: " + stage + ". This is an estimate from height, sitting height, body"
-                    + " size and age; it can be out by about half a year either way, and children grow at different"
-                    + " rates.");
+            String stage = t(m.status() == MaturityStatus.PRE_PHV ? "letter.stage.pre"
+                    : m.status() == MaturityStatus.CIRCA_PHV ? "letter.stage.circa" : "letter.stage.post");
+            ps.add(t("letter.stage", stage));
         }
         if (h.growth().rapidGrowth()) {
-            ps.add(first + " has been growing fast recently (more than " + n(builder.settings().alert()
-                    .thresholdCmPerYear(), 0) + " cm a year). During fast growth, muscles, tendons and growth plates"
-                    + " can be sensitive, so our physio keeps an eye on training load. If " + first + " mentions pain"
-                    + " at the knees or heels, please let our physio know.");
+            ps.add(t("letter.rapid", first, n(builder.settings().alert().thresholdCmPerYear(), 0)));
         }
-        return new Letter.Section("Growth", ps);
+        return new Letter.Section(t("letter.section.growth"), ps);
     }
 
     private Letter.Section shape(PersonHistory h, List<VisitResult> visits, String first, boolean skinfolds) {
         List<String> ps = new ArrayList<>();
-        ps.add(SCALE + (skinfolds ? " They are muscle and bone build, slenderness (how long and lean the build is for"
-                + " its height) and a skinfold rating (from the thickness of skinfolds under the skin)."
-                : " They are muscle and bone build and slenderness (how long and lean the build is for its height);"
-                + " at this age we describe only these two."));
+        ps.add(t("letter.scale") + " " + t(skinfolds ? "letter.scale.three" : "letter.scale.two"));
         List<VisitResult> rated = visits.stream().filter(r -> r.somatotype() != null).toList();
         if (rated.isEmpty()) {
-            ps.add("None of the measurements in this period was complete enough to describe body shape.");
-            return new Letter.Section("Body shape", ps);
+            ps.add(t("letter.shape.none"));
+            return new Letter.Section(t("letter.section.shape"), ps, true);
         }
         VisitResult a = rated.get(0);
         VisitResult b = rated.get(rated.size() - 1);
         Rating ra = a.somatotype().rating();
         if (rated.size() == 1) {
-            ps.add("On " + a.visit().measuredAt().toLocalDate().format(dates) + ": muscle and bone build "
-                    + n(ra.mesomorphy(), 1) + ", slenderness " + n(ra.ectomorphy(), 1)
-                    + (skinfolds ? ", skinfold rating " + n(ra.endomorphy(), 1) : "") + ".");
-            return new Letter.Section("Body shape", ps);
+            String day = a.visit().measuredAt().toLocalDate().format(dates);
+            ps.add(skinfolds ? t("letter.shape.once.skinfolds", day, n(ra.mesomorphy(), 1), n(ra.ectomorphy(), 1),
+                    n(ra.endomorphy(), 1)) : t("letter.shape.once", day, n(ra.mesomorphy(), 1), n(ra.ectomorphy(), 1)));
+            return new Letter.Section(t("letter.section.shape"), ps, true);
         }
-        ps.add("From " + a.visit().measuredAt().toLocalDate().format(dates) + " to " + b.visit().measuredAt()
-                .toLocalDate().format(dates) + ":");
+        ps.add(t("letter.shape.span", a.visit().measuredAt().toLocalDate().format(dates),
+                b.visit().measuredAt().toLocalDate().format(dates)));
         ps.addAll(componentSentences(builder.verdict(a, b), skinfolds));
         if (skinfolds) {
-            ps.add("The chart shows each measurement as a point, joined in time order; a solid line marks a step"
-                    + " larger than the measurer's repeat error would usually give for the three ratings together,"
-                    + " dashed and dotted lines steps close to it or within it.");
+            ps.add(t("letter.chart.key"));
         }
-        return new Letter.Section("Body shape", ps);
+        return new Letter.Section(t("letter.section.shape"), ps, true);
     }
 
     /** What the letter says of the ratings' scale; no printed rating lies outside it (ratings are never below 0.1). */
-    public static final String SCALE = "Body shape is described by ratings that start at 0.1 and have no fixed top;"
-            + " most people lie between about 1 and 7.";
+    public static final String SCALE = Messages.get(Locale.ENGLISH, "letter.scale");
 
     /** How a letter reads one rating's change against the measurer's repeat error, judged on printed numbers too. */
     public enum ComponentReading {
         /** Beyond its MDC95, and the printed change is larger than the printed error. */
-        LARGER(": larger than the measurer's repeat error would usually give (up to about %s)."),
+        LARGER("letter.reading.larger"),
         /** Within its MDC95, and the printed change is no larger than the printed error. */
-        WITHIN(": within the measurer's repeat error (up to about %s), so it may be no real change at all."),
+        WITHIN("letter.reading.within"),
         /** The exact figures and the printed ones would tell different stories: said plainly. */
-        CLOSE(": about the size of the measurer's repeat error (up to about %s), so it may or may not be a real"
-                + " change.");
+        CLOSE("letter.reading.close");
 
-        private final String pattern;
+        private final String key;
 
-        ComponentReading(String pattern) {
-            this.pattern = pattern;
+        ComponentReading(String key) {
+            this.key = key;
         }
 
-        /** The reading's words with the printed repeat error. */
+        /** The reading's words with the printed repeat error, in English. */
         public String words(String error) {
-            return String.format(Locale.ROOT, pattern, error);
+            return words(Locale.ENGLISH, error);
+        }
+
+        /** The reading's words with the printed repeat error, in a language. */
+        public String words(Locale language, String error) {
+            return Messages.get(language, key, error);
         }
 
         /**
@@ -259,18 +283,22 @@ public final class LetterComposer {
             BigDecimal change = pt.subtract(pf);
             BigDecimal error = printedError(v.mdc95()[c]);
             ComponentReading reading = ComponentReading.of(v.componentBeyond(c), change, error);
-            String name = COMPONENT_NAMES.get(c);
-            String moved = change.signum() == 0 ? name + " stayed at " + n(to, 1)
-                    : name + " went from " + n(from, 1) + " to " + n(to, 1) + ", a change of " + n(change.doubleValue(), 1);
+            String name = t("letter.component." + COMPONENT_KEYS.get(c) + ".subject");
+            String moved = change.signum() == 0 ? t("letter.component.stayed", name, n(to, 1))
+                    : t("letter.component.moved", name, n(from, 1), n(to, 1), n(change.doubleValue(), 1));
             out.add(Character.toUpperCase(moved.charAt(0)) + moved.substring(1)
-                    + reading.words(n(error.doubleValue(), 1)));
+                    + reading.words(locale, n(error.doubleValue(), 1)));
         }
         return out;
     }
 
     /** The letter's names of the ratings, by component index (endo, meso, ecto). */
-    public static final List<String> COMPONENT_NAMES = List.of("skinfold rating", "muscle and bone build",
-            "slenderness");
+    public static final List<String> COMPONENT_NAMES = componentNames(Locale.ENGLISH);
+
+    /** The letter's names of the ratings in a language, by component index (endo, meso, ecto). */
+    public static List<String> componentNames(Locale language) {
+        return COMPONENT_KEYS.stream().map(k -> Messages.get(language, "letter.component." + k)).toList();
+    }
 
     /** A paragraph on each training block of the period the person took part in (visits near both ends). */
     private java.util.Optional<Letter.Section> blockSection(PersonHistory h, String first, boolean skinfolds) {
@@ -286,15 +314,14 @@ public final class LetterComposer {
                     org.shapetrail.history.BlockReview.DEFAULT_WINDOW_DAYS, p -> p.id() == h.person().id() ? h
                             : histories.computeIfAbsent(p.id(), id -> builder.history(p)));
             review.athletes().stream().filter(a -> a.person().id() == h.person().id()).findFirst().ifPresent(a -> {
-                ps.add(first + " took part in the " + block.name() + " (" + block.startsOn().format(dates) + " to "
-                        + block.endsOn().format(dates) + "). Measured before it (" + a.before().visit().measuredAt()
-                        .toLocalDate().format(dates) + ") and after it (" + a.after().visit().measuredAt().toLocalDate()
-                        .format(dates) + "):");
+                ps.add(t("letter.block", first, block.name(), block.startsOn().format(dates),
+                        block.endsOn().format(dates), a.before().visit().measuredAt().toLocalDate().format(dates),
+                        a.after().visit().measuredAt().toLocalDate().format(dates)));
                 ps.addAll(componentSentences(a.change(), skinfolds));
             });
         }
         return ps.isEmpty() ? java.util.Optional.empty()
-                : java.util.Optional.of(new Letter.Section("Training block", ps));
+                : java.util.Optional.of(new Letter.Section(t("letter.section.block"), ps));
     }
 
     private ChartModel chart(PersonHistory h, List<VisitResult> visits) {
@@ -318,7 +345,7 @@ public final class LetterComposer {
         // the whole chart at print size, its corners named as the letter names the ratings, so nothing is cut off
         // the line styles are told in the paragraph above the chart, so the chart carries no key of its own
         SomatochartBuilder b = new SomatochartBuilder(h.person().displayName(), locale).withoutLegend()
-                .withAxisNames("skinfold rating", "muscle and bone build", "slenderness")
+                .withAxisNames(t("letter.chart.endo"), t("letter.chart.meso"), t("letter.chart.ecto"))
                 .path(h.person().displayName(), pts, verdicts, true);
         return org.shapetrail.chart.ChartPainter.laidOutFor(b::buildWhole, LetterPdf.CHART_PT, LetterPdf.CHART_PT);
     }

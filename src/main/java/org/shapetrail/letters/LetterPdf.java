@@ -105,7 +105,8 @@ public final class LetterPdf {
     public static void write(Letter letter, OutputStream out) throws IOException {
         try (PDDocument doc = new PDDocument()) {
             append(doc, letter);
-            doc.getDocumentInformation().setTitle("Progress letter — " + letter.recipientName());
+            doc.getDocumentInformation().setTitle(org.shapetrail.i18n.Messages.get(letter.language(), "letter.pdf.title",
+                    letter.recipientName()));
             doc.save(out);
         }
     }
@@ -141,11 +142,11 @@ public final class LetterPdf {
             for (String p : s.paragraphs()) {
                 paragraph(p, regular, BODY, INK, 5);
             }
-            if (s.title().equals("Body shape")) {
+            if (s.chartAfter()) {
                 figures(letter);
             }
         }
-        if (letter.sections().stream().noneMatch(s -> s.title().equals("Body shape"))) {
+        if (letter.sections().stream().noneMatch(Letter.Section::chartAfter)) {
             figures(letter);
         }
         need(LEADING * (letter.cautions().size() + 2));

@@ -13,12 +13,33 @@ public final class Wording {
     public static final List<String> BANNED = List.of("fat", "skinny", "overweight", "obese", "ideal", "should weigh",
             "good body", "bad body", "underweight", "chubby", "thin");
 
+    /**
+     * The same in Spanish and Portuguese: words that rate a body (fat, thin, obese, overweight, ideal, a
+     * good or bad body), in their usual forms. Listed in docs/languages.md for review.
+     */
+    public static final java.util.Map<String, List<String>> BANNED_BY_LANGUAGE = java.util.Map.of(
+            "en", BANNED,
+            "es", List.of("gordo", "gorda", "gordito", "gordita", "flaco", "flaca", "delgaducho", "obeso", "obesa",
+                    "obesidad", "sobrepeso", "ideal", "debería pesar", "buen cuerpo", "mal cuerpo", "bajo peso",
+                    "rellenito", "rellenita"),
+            "pt", List.of("gordo", "gorda", "gordinho", "gordinha", "magricela", "obeso", "obesa", "obesidade",
+                    "sobrepeso", "excesso de peso", "ideal", "deveria pesar", "corpo bom", "corpo mau", "baixo peso",
+                    "cheinho", "cheinha"));
+
     private Wording() {
     }
 
-    /** The banned words present in {@code text} (whole words, any case). */
+    /** The banned English words present in {@code text} (whole words, any case). */
     public static List<String> bannedIn(String text) {
+        return bannedIn(text, Locale.ENGLISH);
+    }
+
+    /** The banned words of a letter's language (and the English ones) present in {@code text}. */
+    public static List<String> bannedIn(String text, Locale language) {
         String t = text.toLowerCase(Locale.ROOT);
-        return BANNED.stream().filter(w -> Pattern.compile("\\b" + Pattern.quote(w) + "\\b").matcher(t).find()).toList();
+        java.util.Set<String> words = new java.util.LinkedHashSet<>(BANNED);
+        words.addAll(BANNED_BY_LANGUAGE.getOrDefault(language.getLanguage(), List.of()));
+        return words.stream().filter(w -> Pattern.compile("(?U)\\b" + Pattern.quote(w) + "\\b").matcher(t).find())
+                .toList();
     }
 }

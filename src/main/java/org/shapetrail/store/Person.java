@@ -13,8 +13,24 @@ import org.shapetrail.measure.Sex;
  * @param predictedAdultStatureCm a predicted adult stature entered from another method, cm, or null
  */
 public record Person(long id, String displayName, Sex sex, LocalDate birthDate, Double fatherStatureCm,
-                     Double motherStatureCm, String notes, Consent consent, Double predictedAdultStatureCm) {
+                     Double motherStatureCm, String notes, Consent consent, Double predictedAdultStatureCm,
+                     String letterLanguage) {
+    /** The languages a letter can be written in; "" is the desk's own. */
+    public static final java.util.List<String> LETTER_LANGUAGES = java.util.List.of("", "en", "es", "pt");
+
+    /** A person whose letters are in the desk's language. */
+    public Person(long id, String displayName, Sex sex, LocalDate birthDate, Double fatherStatureCm,
+                  Double motherStatureCm, String notes, Consent consent, Double predictedAdultStatureCm) {
+        this(id, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, consent, predictedAdultStatureCm,
+                "");
+    }
+
     public Person {
+        letterLanguage = letterLanguage == null ? "" : letterLanguage;
+        if (!LETTER_LANGUAGES.contains(letterLanguage)) {
+            throw new IllegalArgumentException("letter language \"" + letterLanguage + "\" is not one of en, es, pt"
+                    + " (or empty for the desk's language)");
+        }
         Objects.requireNonNull(displayName, "displayName");
         if (displayName.isBlank()) {
             throw new IllegalArgumentException("a person needs a name");
@@ -41,19 +57,27 @@ public record Person(long id, String displayName, Sex sex, LocalDate birthDate, 
 
     public Person withId(long newId) {
         return new Person(newId, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, consent,
-                predictedAdultStatureCm);
+                predictedAdultStatureCm, letterLanguage);
     }
 
     public Person withConsent(Consent c) {
         return new Person(id, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, c,
-                predictedAdultStatureCm);
+                predictedAdultStatureCm, letterLanguage);
     }
 
     public Person withParents(Double fatherCm, Double motherCm) {
-        return new Person(id, displayName, sex, birthDate, fatherCm, motherCm, notes, consent, predictedAdultStatureCm);
+        return new Person(id, displayName, sex, birthDate, fatherCm, motherCm, notes, consent, predictedAdultStatureCm,
+                letterLanguage);
     }
 
     public Person withPredictedAdultStature(Double cm) {
-        return new Person(id, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, consent, cm);
+        return new Person(id, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, consent, cm,
+                letterLanguage);
+    }
+
+    /** The same person with letters in another language ("" for the desk's). */
+    public Person withLetterLanguage(String language) {
+        return new Person(id, displayName, sex, birthDate, fatherStatureCm, motherStatureCm, notes, consent,
+                predictedAdultStatureCm, language);
     }
 }

@@ -41,6 +41,7 @@ public final class PersonExport {
                 .field("fatherStatureCm", p.fatherStatureCm())
                 .field("motherStatureCm", p.motherStatureCm())
                 .field("predictedAdultStatureCm", p.predictedAdultStatureCm())
+                .field("letterLanguage", p.letterLanguage())
                 .field("notes", p.notes());
         j.key("consent").open('{')
                 .field("measurement", p.consent().measurement())

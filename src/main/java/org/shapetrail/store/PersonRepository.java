@@ -14,7 +14,8 @@ import org.shapetrail.measure.Sex;
 /** People: insert, update, find, list and erase (with everything that hangs on them). */
 public final class PersonRepository {
     private static final String COLUMNS = "id, display_name, sex, birth_date, father_stature_cm, mother_stature_cm,"
-            + " notes, consent_measurement, consent_photographs, consent_share_with_parent, predicted_adult_stature_cm";
+            + " notes, consent_measurement, consent_photographs, consent_share_with_parent, predicted_adult_stature_cm,"
+            + " letter_language";
     private final Connection c;
 
     PersonRepository(Connection c) {
@@ -25,7 +26,8 @@ public final class PersonRepository {
     public Person insert(Person p) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO person (display_name, sex, birth_date,"
                 + " father_stature_cm, mother_stature_cm, notes, consent_measurement, consent_photographs,"
-                + " consent_share_with_parent, predicted_adult_stature_cm) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)",
+                + " consent_share_with_parent, predicted_adult_stature_cm, letter_language)"
+                + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)",
                 Statement.RETURN_GENERATED_KEYS)) {
             bind(ps, p);
             ps.executeUpdate();
@@ -37,9 +39,10 @@ public final class PersonRepository {
     public void update(Person p) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("UPDATE person SET display_name = ?, sex = ?, birth_date = ?,"
                 + " father_stature_cm = ?, mother_stature_cm = ?, notes = ?, consent_measurement = ?,"
-                + " consent_photographs = ?, consent_share_with_parent = ?, predicted_adult_stature_cm = ? WHERE id = ?")) {
+                + " consent_photographs = ?, consent_share_with_parent = ?, predicted_adult_stature_cm = ?,"
+                + " letter_language = ? WHERE id = ?")) {
             bind(ps, p);
-            ps.setLong(11, p.id());
+            ps.setLong(12, p.id());
             if (ps.executeUpdate() != 1) {
                 throw new StoreException("There is no person with id " + p.id() + ".");
             }
@@ -57,6 +60,7 @@ public final class PersonRepository {
         ps.setInt(8, p.consent().photographs() ? 1 : 0);
         ps.setInt(9, p.consent().shareWithParent() ? 1 : 0);
         Sql.setNullableDouble(ps, 10, p.predictedAdultStatureCm());
+        ps.setString(11, p.letterLanguage());
     }
 
     public Optional<Person> find(long id) throws SQLException {
@@ -97,6 +101,7 @@ public final class PersonRepository {
                 LocalDate.parse(rs.getString("birth_date")), Sql.nullableDouble(rs, "father_stature_cm"),
                 Sql.nullableDouble(rs, "mother_stature_cm"), rs.getString("notes"),
                 new Consent(rs.getInt("consent_measurement") == 1, rs.getInt("consent_photographs") == 1,
-                        rs.getInt("consent_share_with_parent") == 1), Sql.nullableDouble(rs, "predicted_adult_stature_cm"));
+                        rs.getInt("consent_share_with_parent") == 1), Sql.nullableDouble(rs, "predicted_adult_stature_cm"),
+                rs.getString("letter_language"));
     }
 }

@@ -37,6 +37,7 @@ class PersonFormViewModelTest {
         vm.father.set("182.0");
         vm.predicted.set("171.5");
         vm.squad.set(squad);
+        vm.letterLanguage.set("pt"); // the family reads Portuguese
         assertTrue(vm.canSave.get());
         var saved = vm.save().orElseThrow();
         try (Database db = Database.open(f)) {
@@ -44,5 +45,6 @@ class PersonFormViewModelTest {
             assertEquals(1, db.inTransaction(tx -> tx.squads().membershipsOf(saved.id())).size());
         }
         assertEquals(171.5, saved.predictedAdultStatureCm());
+        assertEquals("pt", saved.letterLanguage()); // and stored with the person (the equality above reads it back)
     }
 }

@@ -119,7 +119,8 @@ class LetterClaimsTest {
         int checked = 0;
         int blocks = 0;
         for (LetterSettings period : periods) {
-            LetterComposer composer = new LetterComposer(builder, period, Locale.UK);
+            // every letter in English, whatever the person's letter language: the claims are read from the English words
+            LetterComposer composer = new LetterComposer(builder, period, Locale.UK).allIn(Locale.UK);
             for (Person p : builder.academy().people()) {
                 PersonHistory h = builder.history(p);
                 Letter l = composer.compose(h);

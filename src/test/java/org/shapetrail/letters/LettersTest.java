@@ -99,10 +99,11 @@ class LettersTest {
     void everyDemoLetterAvoidsTheBannedWordsCarriesTheCautionsAndFitsOnTwoPages() throws Exception {
         LetterComposer c = new LetterComposer(builder, YEAR, Locale.UK);
         for (var p : builder.academy().people()) {
-            byte[] bytes = pdf(c.compose(builder.history(p)));
+            Letter letter = c.compose(builder.history(p));
+            byte[] bytes = pdf(letter);
             String t = text(bytes);
-            assertEquals(List.of(), Wording.bannedIn(t), p.displayName());
-            for (String caution : LetterComposer.CAUTIONS) {
+            assertEquals(List.of(), Wording.bannedIn(t, letter.language()), p.displayName());
+            for (String caution : LetterComposer.cautions(letter.language())) {
                 assertTrue(t.replace("\n", " ").replace("  ", " ").contains(caution.substring(0, 30)),
                         p.displayName() + ": " + caution);
             }

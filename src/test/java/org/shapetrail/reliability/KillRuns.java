@@ -113,13 +113,14 @@ public final class KillRuns {
                 sample(template);
                 try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + template.toAbsolutePath());
                      Statement s = c.createStatement()) {
-                    // as schema 4 left a file: without what versions 5 to 8 add, and from before Flyway
+                    // as schema 4 left a file: without what versions 5 to 9 add, and from before Flyway
                     s.executeUpdate("DROP TABLE flyway_schema_history");
                     s.executeUpdate("DROP TABLE audit_entry");
                     for (String column : List.of("row_version", "entered_by", "changed_by", "changed_at")) {
                         s.executeUpdate("ALTER TABLE visit DROP COLUMN " + column);
                     }
                     s.executeUpdate("DROP TABLE file_meta");
+                    s.executeUpdate("ALTER TABLE person DROP COLUMN letter_language");
                     s.executeUpdate("DROP TABLE block_pick");
                     s.executeUpdate("ALTER TABLE training_block DROP COLUMN aim");
                     s.executeUpdate("PRAGMA user_version = 4");

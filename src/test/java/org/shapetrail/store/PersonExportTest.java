@@ -40,6 +40,7 @@ class PersonExportTest {
                         "fatherStatureCm": null,
                         "motherStatureCm": 165.5,
                         "predictedAdultStatureCm": null,
+                        "letterLanguage": "",
                         "notes": "left-handed",
                         "consent": {
                           "measurement": true,

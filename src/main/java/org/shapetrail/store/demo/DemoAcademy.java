@@ -212,6 +212,9 @@ public final class DemoAcademy {
                 double mother = 165 + rnd.nextGaussian() * 6;
                 p = p.withParents(round1(father), round1(mother));
             }
+            if (index % 10 == 3) {
+                p = p.withLetterLanguage(index % 20 == 3 ? "es" : "pt"); // families who read another language
+            }
             p = tx.people().insert(p);
             memberships(tx, p, jp, u14, u16, u18, rowing);
             Body body = juniorBody(rnd, jp.sex());

@@ -1,0 +1,66 @@
+package org.shapetrail.i18n;
+
+import java.text.MessageFormat;
+import java.util.List;
+import java.util.Locale;
+import java.util.MissingResourceException;
+import java.util.ResourceBundle;
+
+/**
+ * The words a person reads, in English (the default), Spanish and Portuguese: Java's ResourceBundle over
+ * {@code org/shapetrail/i18n/messages*.properties} (UTF-8), each pattern formatted with MessageFormat in
+ * the reader's locale (plural-aware {@code choice} where counts appear). A key missing from a language
+ * falls back to English, and a test checks none is missing.
+ */
+public final class Messages {
+    /** The bundles' base name. */
+    public static final String BUNDLE = "org.shapetrail.i18n.messages";
+
+    /** The languages Shapetrail is written in, English first. */
+    public static final List<String> LANGUAGES = List.of("en", "es", "pt");
+
+    private Messages() {
+    }
+
+    /** The bundle of a locale's language (English for any other). */
+    public static ResourceBundle bundle(Locale locale) {
+        return ResourceBundle.getBundle(BUNDLE, supported(locale), ResourceBundle.Control.getNoFallbackControl(
+                ResourceBundle.Control.FORMAT_PROPERTIES));
+    }
+
+    /** The locale itself when its language is one of ours, else English (keeping nothing of the other). */
+    public static Locale supported(Locale locale) {
+        return locale != null && LANGUAGES.contains(locale.getLanguage()) && !locale.getLanguage().equals("en")
+                ? locale : Locale.ROOT;
+    }
+
+    /** The text of {@code key} in the locale's language, its arguments put in with MessageFormat. */
+    public static String get(Locale locale, String key, Object... args) {
+        String pattern;
+        try {
+            pattern = bundle(locale).getString(key);
+        } catch (MissingResourceException e) {
+            throw new IllegalStateException("no text for " + key + " in " + locale, e);
+        }
+        return new MessageFormat(pattern, locale == null ? Locale.ROOT : locale).format(args);
+    }
+
+    /** A language code of ours for a locale: en, es or pt. */
+    public static String languageOf(Locale locale) {
+        return supported(locale) == Locale.ROOT ? "en" : locale.getLanguage();
+    }
+
+    /**
+     * The locale for a language code ("es", "pt", "en"), keeping the country of {@code near} where it
+     * speaks that language (a British desk writes English letters as en-GB).
+     */
+    public static Locale localeFor(String language, Locale near) {
+        if (language == null || language.isBlank()) {
+            return near;
+        }
+        if (near != null && near.getLanguage().equals(language)) {
+            return near;
+        }
+        return Locale.forLanguageTag(language);
+    }
+}

@@ -1,0 +1,76 @@
+package org.shapetrail.i18n;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.text.MessageFormat;
+import java.util.Locale;
+import java.util.ResourceBundle;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.junit.jupiter.api.Test;
+
+/** The three languages' bundles agree: the same keys, none empty, each pattern with the same arguments. */
+class MessagesBundleTest {
+    static final Pattern ARGUMENT = Pattern.compile("\\{(\\d+)");
+
+    static Set<Integer> arguments(String pattern) {
+        new MessageFormat(pattern); // a pattern MessageFormat cannot read fails here
+        Set<Integer> out = new TreeSet<>();
+        Matcher m = ARGUMENT.matcher(pattern);
+        while (m.find()) {
+            out.add(Integer.parseInt(m.group(1)));
+        }
+        return out;
+    }
+
+    static Set<String> ownKeys(String lang) {
+        java.util.Properties p = new java.util.Properties();
+        try (var in = Messages.class.getResourceAsStream("messages_" + lang + ".properties");
+             var r = new java.io.InputStreamReader(in, java.nio.charset.StandardCharsets.UTF_8)) {
+            p.load(r);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        return p.stringPropertyNames();
+    }
+
+    @Test
+    void everyKeyIsInEveryLanguageWithTheSameArguments() {
+        ResourceBundle en = Messages.bundle(Locale.ENGLISH);
+        Set<String> base = new TreeSet<>(en.keySet());
+        assertFalse(base.isEmpty());
+        for (String lang : new String[] {"es", "pt"}) {
+            ResourceBundle other = Messages.bundle(Locale.forLanguageTag(lang));
+            assertEquals(lang, other.getLocale().getLanguage(), "the " + lang + " bundle itself, not English");
+            // the file's own keys, not those the bundle would inherit from English
+            Set<String> own = new TreeSet<>(ownKeys(lang));
+            assertEquals(base, own, lang + ": keys missing or extra");
+            for (String key : base) {
+                String text = other.getString(key);
+                assertFalse(text.isBlank(), lang + " " + key);
+                assertEquals(arguments(en.getString(key)), arguments(text), lang + " " + key);
+            }
+        }
+        for (String key : base) {
+            assertFalse(en.getString(key).isBlank(), "en " + key);
+        }
+    }
+
+    @Test
+    void numbersAndPluralsFollowTheLanguage() {
+        // the letter's month count uses MessageFormat's choice: 1 month, 5 months (common practice for plurals)
+        String one = Messages.get(Locale.forLanguageTag("es"), "letter.height.gain", "150,0", "a", "151,0", "b", "1,0",
+                1, "");
+        assertTrue(one.contains("en 1 mes."), one);
+        String five = Messages.get(Locale.forLanguageTag("pt"), "letter.height.gain", "150,0", "a", "156,0", "b", "6,0",
+                5, "");
+        assertTrue(five.contains("em 5 meses."), five);
+        // an unknown language falls back to English, never to a half-translated mix
+        assertEquals(Messages.get(Locale.ENGLISH, "letter.title"), Messages.get(Locale.GERMAN, "letter.title"));
+        assertEquals("pt", Messages.languageOf(Locale.forLanguageTag("pt-BR")));
+    }
+}
