@@ -43,6 +43,19 @@ set -e
 cmp "$work/jar.csv" "$work/image.csv" || fail "rate output differs between the jar and the image"
 echo "rate: same $(wc -l < "$work/image.csv") lines and exit code $img_rc as the jar"
 grep -q "metres" "$work/image.csv" || fail "rate did not report the stature given in metres"
+if [ -n "${SHAPETRAIL_TEST_PG:-}" ]; then
+    # the image's trimmed runtime reaches a server too (the driver, Flyway, SCRAM): a fresh schema, the
+    # sample academy imported into it by the image, and the same people list as the jar reads there
+    sep='?'; case "$SHAPETRAIL_TEST_PG" in *\?*) sep='&';; esac
+    uri="$SHAPETRAIL_TEST_PG${sep}currentSchema=image_check_$$"
+    java -jar target/shapetrail.jar export trials --db sample-db/saltmarsh-bay.sqlite --out "$work/trials.csv" > /dev/null
+    env -i HOME="$work" PATH="$PWD/$image/bin" PGPASSWORD="${PGPASSWORD:-}" shapetrail import --db "$uri" --commit \
+        --create-missing --show none "$work/trials.csv" > /dev/null || fail "the image could not import into the server"
+    env -i HOME="$work" PATH="$PWD/$image/bin" PGPASSWORD="${PGPASSWORD:-}" shapetrail people --db "$uri" > "$work/image-people.txt"
+    java -jar target/shapetrail.jar people --db "$uri" > "$work/jar-people.txt"
+    cmp "$work/jar-people.txt" "$work/image-people.txt" || fail "people on the server differ between the jar and the image"
+    echo "server: the image imported $(($(wc -l < "$work/image-people.txt") - 1)) people into a fresh schema and lists them as the jar does"
+fi
 
 say "installing the package"
 installed_here=yes

@@ -739,6 +739,10 @@ public final class Database implements AutoCloseable {
                 return new StoreException("The server refused this: beyond what your account may do ("
                         + firstLine(e.getMessage()) + "). Nothing was changed.", e);
             }
+            if (state.equals("23503")) { // the same words as for a file
+                return new StoreException("That change would leave a reference to a record that does not exist"
+                        + " (or remove one that others still refer to); nothing was changed.", e);
+            }
             if (state.startsWith("23")) {
                 return new StoreException("That change would break a rule of the record (" + firstLine(e.getMessage())
                         + "); nothing was changed.", e);
