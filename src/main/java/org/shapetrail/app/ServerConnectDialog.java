@@ -62,6 +62,8 @@ final class ServerConnectDialog {
         problem.setWrapText(true);
         problem.setMaxWidth(520);
         problem.getStyleClass().add("form-problem");
+        problem.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE); // the whole message, over as many lines as it takes
+        where.textProperty().addListener((o, a, b) -> problem.setText("")); // an old complaint goes once the address changes
         Label note = new Label("The password is used for this session only and never saved.");
         note.getStyleClass().add("hint");
         GridPane g = new GridPane();
