@@ -15,7 +15,10 @@ import org.shapetrail.measure.Site;
 public record Column(String header, Role role, Site site, int trial, InputUnit unit) {
     /** The roles a column can have. */
     public enum Role {
-        PERSON_ID, NAME, BIRTH_DATE, SEX, DATE, TIME, MEASURER, CONTEXT,
+        PERSON_ID, NAME, BIRTH_DATE, SEX,
+        /** the language of the person's letters: en, es, pt, or empty for the desk's */
+        LETTER_LANGUAGE,
+        DATE, TIME, MEASURER, CONTEXT,
         /** wide layout: a site's trial or final value */
         SITE_VALUE,
         /** long layout: which site the row's value is */

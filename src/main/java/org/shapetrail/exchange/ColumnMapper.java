@@ -72,6 +72,9 @@ public final class ColumnMapper {
         for (String w : List.of("sex", "gender")) {
             m.put(w, Column.Role.SEX);
         }
+        for (String w : List.of("letter language", "letters in", "language of letters")) {
+            m.put(w, Column.Role.LETTER_LANGUAGE);
+        }
         for (String w : List.of("date", "visit date", "measured on", "test date", "session date")) {
             m.put(w, Column.Role.DATE);
         }

@@ -48,8 +48,8 @@ public final class Exporter {
     /** Every raw trial, one per row (the long layout Shapetrail also imports). */
     public static int trials(Academy a, Writer out) throws IOException {
         CSVPrinter p = printer(out);
-        p.printRecord("person_id", "name", "birth_date", "sex", "date", "time", "measurer", "context", "site", "trial",
-                "value", "unit");
+        p.printRecord("person_id", "name", "birth_date", "sex", "letter_language", "date", "time", "measurer", "context",
+                "site", "trial", "value", "unit");
         Map<Long, Person> people = new HashMap<>();
         a.people().forEach(x -> people.put(x.id(), x));
         Map<Long, Measurer> measurers = new HashMap<>();
@@ -60,7 +60,7 @@ public final class Exporter {
             for (SiteTrials t : v.trials()) {
                 for (int i = 0; i < t.values().size(); i++) {
                     p.printRecord(who.id(), CsvSafety.text(who.displayName()), who.birthDate(), who.sex().code(),
-                            v.measuredAt().toLocalDate(), v.measuredAt().format(TIME),
+                            who.letterLanguage(), v.measuredAt().toLocalDate(), v.measuredAt().format(TIME),
                             CsvSafety.text(measurers.get(v.measurerId()).name()), CsvSafety.text(v.context()),
                             t.site().code(), i + 1, t.values().get(i), t.site().unit().symbol());
                     rows++;

@@ -39,7 +39,7 @@ final class ImportReading {
     private static final DateTimeFormatter DMY_DASH = DateTimeFormatter.ofPattern("d-M-uuuu");
 
     private static final List<Column.Role> KEY_ROLES = List.of(Column.Role.PERSON_ID, Column.Role.NAME,
-            Column.Role.BIRTH_DATE, Column.Role.SEX, Column.Role.DATE, Column.Role.TIME, Column.Role.MEASURER,
+            Column.Role.BIRTH_DATE, Column.Role.SEX, Column.Role.LETTER_LANGUAGE, Column.Role.DATE, Column.Role.TIME, Column.Role.MEASURER,
             Column.Role.CONTEXT);
 
     private static final Site[] SITES = Site.values();
@@ -477,6 +477,11 @@ final class ImportReading {
         String name = cell(rec, Column.Role.NAME).strip();
         String dobText = cell(rec, Column.Role.BIRTH_DATE);
         String sexText = cell(rec, Column.Role.SEX).strip();
+        String language = cell(rec, Column.Role.LETTER_LANGUAGE).strip().toLowerCase(java.util.Locale.ROOT);
+        if (!Person.LETTER_LANGUAGES.contains(language)) {
+            why.add("letter language \"" + language + "\" is not en, es or pt (leave it empty for the academy's own)");
+            language = "";
+        }
         Person known = null;
         LocalDate birth = null;
         Person byId = null;
@@ -521,6 +526,11 @@ final class ImportReading {
                     Integer idx = newPeopleIndex.get(key);
                     if (idx != null) {
                         newIndex = idx;
+                        String earlier = newPeople.get(idx).letterLanguage();
+                        if (!language.isEmpty() && !language.equals(earlier)) {
+                            why.add("letter language " + language + " contradicts an earlier row for " + name + " ("
+                                    + (earlier.isEmpty() ? "empty" : earlier) + "); give one language per person");
+                        }
                     } else if (!options.createMissing()) {
                         why.add(name + " (born " + dob + ") is not in the file; allow new people to add them");
                     } else {
@@ -530,7 +540,7 @@ final class ImportReading {
                                     && !sexText.equalsIgnoreCase("male")) {
                                 throw new IllegalArgumentException(sexText);
                             }
-                            newPeople.add(Person.draft(name, sex, dob));
+                            newPeople.add(Person.draft(name, sex, dob).withLetterLanguage(language));
                             if (stream != null) {
                                 stream.person(newPeople.get(newPeople.size() - 1));
                             }
@@ -546,6 +556,11 @@ final class ImportReading {
         if (known != null) {
             personId = known.id();
             birth = known.birthDate();
+            if (!language.isEmpty() && !language.equals(known.letterLanguage())) {
+                why.add("letter language " + language + " contradicts the file, where " + known.displayName()
+                        + "'s letters are in " + (known.letterLanguage().isEmpty() ? "the academy's language"
+                        : known.letterLanguage()) + "; correct the row, or the person (Edit person…)");
+            }
             if (!sexText.isEmpty()) {
                 Optional<Sex> sex = sexOf(sexText);
                 if (sex.isEmpty()) {

@@ -44,7 +44,7 @@ class ExchangeTest {
         a.measurers().forEach(m -> ms.put(m.id(), m));
         for (Visit v : a.visits()) {
             Person p = people.get(v.personId());
-            out.add(p.displayName() + "|" + p.birthDate() + "|" + p.sex() + "|" + v.measuredAt() + "|"
+            out.add(p.displayName() + "|" + p.birthDate() + "|" + p.sex() + "|" + p.letterLanguage() + "|" + v.measuredAt() + "|"
                     + ms.get(v.measurerId()).name() + "|" + v.context() + "|" + v.trials());
         }
         return out;
@@ -212,6 +212,23 @@ class ExchangeTest {
         Path csv = fileWith("m.csv", "name,birth_date,sex,date,measurer,stature\nAda Pelling,2010-03-04,F,2024-01-10,X,1.50\n");
         ImportPlan p = dry(csv, dir.resolve("m.sqlite"));
         assertEquals("Stature 1.5 looks like metres; enter 150.0 cm.", p.rows().get(0).reason());
+    }
+
+    @Test
+    void aLetterLanguageComesInWithANewPersonAndAWrongOrContradictingOneIsRefused() throws Exception {
+        Path f = dir.resolve("lang.sqlite");
+        Path csv = fileWith("lang.csv", "name,birth_date,sex,letter_language,date,measurer,stature\n"
+                + "Ada Pelling,2010-03-04,F,pt,2024-01-10,X,150\n");
+        Academy a = importInto(f, csv, CREATE);
+        assertEquals("pt", a.people().get(0).letterLanguage());
+        Path wrong = fileWith("lang2.csv", "name,birth_date,sex,letter_language,date,measurer,stature\n"
+                + "Ada Pelling,2010-03-04,F,fr,2024-02-10,X,151\n"
+                + "Ada Pelling,2010-03-04,F,es,2024-03-10,X,152\n");
+        ImportPlan p = dry(wrong, f);
+        assertEquals("letter language \"fr\" is not en, es or pt (leave it empty for the academy's own)",
+                p.rows().get(0).reason());
+        assertEquals("letter language es contradicts the file, where Ada Pelling's letters are in pt; correct the row,"
+                + " or the person (Edit person…)", p.rows().get(1).reason());
     }
 
     @Test
