@@ -100,6 +100,12 @@ public final class Database implements AutoCloseable {
                         + Migrations.writtenBy(c).map(w -> w + " or later").orElse("a newer Shapetrail")
                         + " on this desk. Nothing was written.");
             }
+            if (version > 0 && version < Migrations.latest() && !ownsSchema(c)) {
+                throw new StoreException("The record at " + shown + " is at schema " + version + " and this "
+                        + AppVersion.named() + " needs schema " + Migrations.latest() + ". Only the record's owner may bring"
+                        + " it up to date: ask your administrator to connect once with " + AppVersion.named()
+                        + " (after a pg_dump, docs/server.md). Nothing was written.");
+            }
             if (version < Migrations.latest()) {
                 Migrations.migrate(c, version, Migrations.latest());
             }
@@ -113,6 +119,14 @@ public final class Database implements AutoCloseable {
         } catch (RuntimeException e) {
             closeQuietly(c);
             throw e;
+        }
+    }
+
+    /** Whether this login owns the record's tables (and so may migrate them). */
+    private static boolean ownsSchema(Connection c) throws SQLException {
+        try (Statement s = c.createStatement(); var rs = s.executeQuery("SELECT tableowner = session_user FROM pg_tables"
+                + " WHERE schemaname = current_schema() AND tablename = 'person'")) {
+            return rs.next() && rs.getBoolean(1);
         }
     }
 

@@ -170,6 +170,32 @@ class StaffServerTest {
     }
 
     @Test
+    void onlyTheOwnerBringsAnOlderSchemaUpToDate() throws Exception {
+        // a record an earlier Shapetrail left at schema 8 (the roles and grants exist from 8 on)
+        String older = TestServer.freshSchema("older");
+        String schema8 = TestServer.schemaOf(older);
+        try (Connection c = TestServer.as(TestServer.address().user(), System.getenv("PGPASSWORD"), schema8)) {
+            Migrations.migrate(c, 0, 8);
+        }
+        ServerAddress base = ServerAddress.parse(older);
+        ServerAddress asMeasurer = new ServerAddress(base.host(), base.port(), base.database(), measurerA, base.options());
+        StoreException e = assertThrows(StoreException.class, () -> Database.connect(asMeasurer, PASSWORD.toCharArray()));
+        assertTrue(e.getMessage().contains("is at schema 8 and this " + AppVersion.named() + " needs schema "
+                + Migrations.latest() + ". Only the record's owner may bring it up to date"), e.getMessage());
+        try (Connection c = TestServer.admin(); Statement s = c.createStatement();
+             ResultSet rs = s.executeQuery("SELECT max(CAST(version AS INTEGER)) FROM " + schema8 + ".flyway_schema_history")) {
+            rs.next();
+            assertEquals(8, rs.getInt(1), "nothing was written");
+        }
+        try (Database owner = Database.open(older)) {
+            assertEquals(Migrations.latest(), owner.schemaVersion());
+        }
+        try (Database d = Database.connect(asMeasurer, PASSWORD.toCharArray())) {
+            assertEquals(java.util.Optional.of(StaffRole.MEASURER), d.role()); // and the measurer gets in once it is
+        }
+    }
+
+    @Test
     void twoPeopleSavingTheSameVisitNeverLoseAChange() throws Exception {
         try (Database a = as(measurerA); Database o = Database.open(uri)) {
             Visit v = newVisit(a, 4, "first version");
