@@ -70,10 +70,15 @@ final class PersonPageView {
 
     /** The entry window for a new visit (or an edit) of the selected person. */
     VisitEntryView entryFor(Visit editing) {
+        return entryFor(editing, null);
+    }
+
+    /** The entry window for an edit of the visit as read with its stamp (the save is checked against it). */
+    VisitEntryView entryFor(Visit editing, org.shapetrail.store.RowStamp seen) {
         PersonHistory h = ctx.vm.selectedHistory().orElseThrow();
         Loaded l = ctx.loaded();
-        return new VisitEntryView(new VisitEntryViewModel(l.source(), l.builder(), h, ctx.locale, editing), ctx.window())
-                .onReload(ctx.vm::reload);
+        return new VisitEntryView(new VisitEntryViewModel(l.source(), l.builder(), h, ctx.locale, editing, seen),
+                ctx.window()).onReload(ctx.vm::reload);
     }
 
     void enterVisit(Visit editing) {
@@ -97,8 +102,14 @@ final class PersonPageView {
                 ctx.vm.errorProperty().set("The visit cannot be edited now: " + Errors.describe(e));
                 return;
             }
-            Optional<Visit> after = entryFor(shown).showAndWait();
-            if (after.isPresent() && before.isPresent()) {
+            if (before.isEmpty()) {
+                ctx.vm.errorProperty().set("The visit of " + line.date() + " is no longer there; reloading.");
+                ctx.vm.reload();
+                return;
+            }
+            // the form shows the visit as just read, and saves against that version (not the loaded page's)
+            Optional<Visit> after = entryFor(before.get().visit(), before.get().stamp()).showAndWait();
+            if (after.isPresent()) {
                 pushUndo("the edit of the visit of " + line.date(), () -> before.get().restoreEdited(file));
                 ctx.vm.reload();
             }

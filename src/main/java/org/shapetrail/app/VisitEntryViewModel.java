@@ -123,13 +123,23 @@ public final class VisitEntryViewModel {
      * @param editing the visit being edited, or null for a new one
      */
     public VisitEntryViewModel(RecordSource file, HistoryBuilder builder, PersonHistory history, Locale locale, Visit editing) {
+        this(file, builder, history, locale, editing, null);
+    }
+
+    /**
+     * @param editing the visit being edited (as stored when {@code seen} was read), or null for a new one
+     * @param seen the edited visit's row stamp read with it: the save is refused if someone saved it since;
+     *     null to save without that check
+     */
+    public VisitEntryViewModel(RecordSource file, HistoryBuilder builder, PersonHistory history, Locale locale,
+            Visit editing, org.shapetrail.store.RowStamp seen) {
         this.person = history.person();
         this.file = file;
         this.builder = builder;
         this.history = history;
         this.locale = locale;
         this.editing = editing;
-        this.seen = editing == null ? null : stampOf(file, editing.id());
+        this.seen = seen;
         measurers.setAll(builder.academy().measurers());
         if (!measurers.isEmpty()) {
             measurer.set(measurers.get(0));
@@ -374,15 +384,6 @@ public final class VisitEntryViewModel {
         } catch (RuntimeException e) {
             problems.setAll(List.of(Errors.describe(e)));
             return Optional.empty();
-        }
-    }
-
-    /** The stored stamp of a visit, or null when it cannot be read now (the save then checks nothing more). */
-    private static org.shapetrail.store.RowStamp stampOf(RecordSource source, long visitId) {
-        try (Database db = source.open()) {
-            return db.inTransaction(tx -> tx.visits().stamp(visitId)).orElse(null);
-        } catch (RuntimeException unreadable) {
-            return null;
         }
     }
 

@@ -342,9 +342,11 @@ public final class Database implements AutoCloseable {
             return java.util.Optional.of(StaffRole.ADMINISTRATOR);
         }
         return inTransaction(tx -> {
+            if (ownsSchema(tx.connection())) {
+                return java.util.Optional.of(StaffRole.ADMINISTRATOR);
+            }
             try (Statement s = tx.connection().createStatement(); var rs = s.executeQuery("SELECT CASE"
-                    + " WHEN (SELECT tableowner FROM pg_tables WHERE schemaname = current_schema() AND tablename = 'person')"
-                    + " = session_user OR pg_has_role(session_user, 'shapetrail_admin', 'MEMBER') THEN 'administrator'"
+                    + " WHEN pg_has_role(session_user, 'shapetrail_admin', 'MEMBER') THEN 'administrator'"
                     + " WHEN pg_has_role(session_user, 'shapetrail_coach', 'MEMBER') THEN 'coach'"
                     + " WHEN pg_has_role(session_user, 'shapetrail_measurer', 'MEMBER') THEN 'measurer' ELSE '' END")) {
                 rs.next();
@@ -355,15 +357,7 @@ public final class Database implements AutoCloseable {
 
     /** The login this desk is connected as on a server; the operating system's user on a file. */
     public String actor() {
-        if (engine == Engine.SQLITE) {
-            return System.getProperty("user.name", "");
-        }
-        return inTransaction(tx -> {
-            try (Statement s = tx.connection().createStatement(); var rs = s.executeQuery("SELECT session_user")) {
-                rs.next();
-                return rs.getString(1);
-            }
-        });
+        return inTransaction(tx -> Engine.actor(tx.connection()));
     }
 
     /**
@@ -684,12 +678,9 @@ public final class Database implements AutoCloseable {
             if (engine == Engine.POSTGRESQL) {
                 // the erased rows' old versions stay in the tables' pages until they are rewritten, which
                 // only the tables' owner may do (the server skips the others with a mere warning)
-                try (var rs = s.executeQuery("SELECT tableowner = session_user FROM pg_tables"
-                        + " WHERE schemaname = current_schema() AND tablename = 'person'")) {
-                    if (!rs.next() || !rs.getBoolean(1)) {
-                        throw new StoreException("the old copies of the erased rows stay in the server's storage until"
-                                + " the record's owner runs: shapetrail erase-person --wipe-only (docs/server.md).");
-                    }
+                if (!ownsSchema(connection)) {
+                    throw new StoreException("the old copies of the erased rows stay in the server's storage until"
+                            + " the record's owner runs: shapetrail erase-person --wipe-only (docs/server.md).");
                 }
                 for (String table : List.of("trial", "visit_rating", "block_pick", "membership", "visit", "person",
                         "audit_entry")) {

@@ -14,6 +14,20 @@ public enum Engine {
         this.folder = folder;
     }
 
+    /**
+     * Who a change is by, as the stamps record it: the login on a server, the desk's operating-system
+     * user on a file (which has no accounts).
+     */
+    static String actor(Connection c) throws SQLException {
+        if (of(c) == POSTGRESQL) {
+            try (java.sql.Statement s = c.createStatement(); java.sql.ResultSet rs = s.executeQuery("SELECT session_user")) {
+                rs.next();
+                return rs.getString(1);
+            }
+        }
+        return System.getProperty("user.name", "");
+    }
+
     /** The engine behind a connection. */
     static Engine of(Connection c) throws SQLException {
         return c.getMetaData().getDatabaseProductName().toLowerCase(java.util.Locale.ROOT).contains("postgres")

@@ -31,6 +31,9 @@ public final class VisitRepository {
     static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd'T'HH:mm:ss");
     private final Connection c;
 
+    /** The engine behind the connection, asked once (see {@link #engine()}). */
+    private Engine engine;
+
     VisitRepository(Connection c) {
         this.c = c;
     }
@@ -77,7 +80,7 @@ public final class VisitRepository {
      * holds the write lock (BEGIN IMMEDIATE), so nobody else can take the next id meanwhile.
      */
     private long nextVisitId() throws SQLException {
-        if (Engine.of(c) == Engine.POSTGRESQL) {
+        if (engine() == Engine.POSTGRESQL) {
             // the same guarantee on a server: writers of visits take turns (readers are not held up), and
             // the id sequence is moved past the ids given here when the write finishes
             try (Statement s = c.createStatement()) {
@@ -148,7 +151,7 @@ public final class VisitRepository {
 
         private BulkWriter(long firstId) throws SQLException {
             this.firstId = firstId;
-            this.trials = new TrialWriter(c, this::writeVisitRows);
+            this.trials = new TrialWriter(c, engine(), this::writeVisitRows);
         }
 
         /** The id of the first visit of this write; the i-th visit (from 0) gets firstId + i. */
@@ -264,7 +267,7 @@ public final class VisitRepository {
                 throw new StoreException("The bulk write has " + visits + " visit rows for " + all.size()
                         + " visits; nothing was written.");
             }
-            if (visits > 0 && Engine.of(c) == Engine.POSTGRESQL) {
+            if (visits > 0 && engine() == Engine.POSTGRESQL) {
                 try (Statement s = c.createStatement()) {
                     s.execute("SELECT setval(pg_get_serial_sequence('visit', 'id'), (SELECT max(id) FROM visit))");
                 }
@@ -322,8 +325,8 @@ public final class VisitRepository {
 
         private final BeforeWrite before;
 
-        TrialWriter(Connection c) throws SQLException {
-            this(c, () -> { });
+        TrialWriter(Connection c, Engine engine) throws SQLException {
+            this(c, engine, () -> { });
         }
 
         /** On a server where row rules do not apply to this login: trials go by COPY, the driver's bulk path. */
@@ -334,9 +337,9 @@ public final class VisitRepository {
         private int copiedRows;
         private static final int COPY_ROWS = 20_000;
 
-        TrialWriter(Connection c, BeforeWrite before) throws SQLException {
+        TrialWriter(Connection c, Engine engine, BeforeWrite before) throws SQLException {
             this.before = before;
-            server = Engine.of(c) == Engine.POSTGRESQL;
+            server = engine == Engine.POSTGRESQL;
             connection = c;
             copy = server && !rowRulesApply(c) ? c.unwrap(org.postgresql.PGConnection.class).getCopyAPI() : null;
             many = c.prepareStatement(insert(ROWS, server));
@@ -509,7 +512,7 @@ public final class VisitRepository {
             throw new IllegalArgumentException("stamp of visit " + seen.visitId() + " for visit " + v.id());
         }
         // take the row first (a writer's lock on it until commit), then compare: no one can slip in between
-        try (PreparedStatement lock = c.prepareStatement(Engine.of(c) == Engine.POSTGRESQL
+        try (PreparedStatement lock = c.prepareStatement(engine() == Engine.POSTGRESQL
                 ? "SELECT id FROM visit WHERE id = ? FOR UPDATE" : "SELECT id FROM visit WHERE id = ?")) {
             lock.setLong(1, v.id());
             lock.executeQuery().close();
@@ -521,16 +524,13 @@ public final class VisitRepository {
         update(v);
     }
 
-    /** Who the change is by, as the stamps record it: the login on a server, the desk's user on a file. */
-    private String actor() throws SQLException {
-        if (Engine.of(c) == Engine.POSTGRESQL) {
-            try (Statement s = c.createStatement(); ResultSet rs = s.executeQuery("SELECT session_user")) {
-                rs.next();
-                return rs.getString(1);
-            }
+    private Engine engine() throws SQLException {
+        if (engine == null) {
+            engine = Engine.of(c);
         }
-        return System.getProperty("user.name", "");
+        return engine;
     }
+
 
     /** Replaces an existing visit's fields and trials (checked first; whole or not at all). */
     public void update(Visit v) throws SQLException {
@@ -548,7 +548,7 @@ public final class VisitRepository {
             ps.setString(4, v.context());
             ps.setString(5, v.notes());
             ps.setInt(6, v.trialCount());
-            ps.setString(7, actor());
+            ps.setString(7, Engine.actor(c));
             ps.setString(8, java.time.Instant.now().truncatedTo(java.time.temporal.ChronoUnit.SECONDS).toString());
             ps.setLong(9, v.id());
             if (ps.executeUpdate() != 1) {
@@ -559,7 +559,7 @@ public final class VisitRepository {
             del.setLong(1, v.id());
             del.executeUpdate();
         }
-        try (TrialWriter trials = new TrialWriter(c)) {
+        try (TrialWriter trials = new TrialWriter(c, engine())) {
             trials.addAll(v.id(), v.trials());
         }
     }

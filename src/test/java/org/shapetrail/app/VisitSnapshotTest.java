@@ -70,6 +70,26 @@ class VisitSnapshotTest {
     }
 
     @Test
+    void undoingAnEditThatSomeoneElseChangedSinceIsRefusedAndOverwritesNothing() throws Exception {
+        Path file = demoWithRating();
+        long id = firstVisit(file);
+        VisitSnapshot snap = VisitSnapshot.read(RecordSource.of(file), id).orElseThrow();
+        try (Database db = Database.open(file)) {
+            for (String context : List.of("my edit", "a colleague's edit after mine")) {
+                db.inTransaction(tx -> {
+                    Visit v = tx.visits().find(id).orElseThrow();
+                    tx.visits().update(new Visit(id, v.personId(), v.measuredAt(), v.measurerId(), context, "", v.trials()));
+                    return null;
+                });
+            }
+        }
+        String now = digest(file);
+        org.junit.jupiter.api.Assertions.assertThrows(org.shapetrail.store.EditConflictException.class,
+                () -> snap.restoreEdited(RecordSource.of(file)));
+        assertEquals(now, digest(file), "the colleague's edit stands");
+    }
+
+    @Test
     void undoingADeletionBringsBackTheVisitWithItsRating() throws Exception {
         Path file = demoWithRating();
         long id = firstVisit(file);
