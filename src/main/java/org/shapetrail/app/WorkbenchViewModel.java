@@ -57,6 +57,7 @@ public final class WorkbenchViewModel {
     private AnalysisSettings settings = AnalysisSettings.standard();
     private final ObjectProperty<RecordSource.Server> passwordWanted = new SimpleObjectProperty<>();
     private AutoCloseable listening;
+    private final javafx.beans.property.BooleanProperty hearingOthers = new SimpleBooleanProperty(false);
     private RecordSource listeningTo;
 
     public WorkbenchViewModel(TaskRunner runner) {
@@ -224,38 +225,73 @@ public final class WorkbenchViewModel {
      * so the open pages show them without a restart. Nothing for a file.
      */
     private void listenTo(Loaded l) {
-        if (listening != null && l.source().equals(listeningTo)) {
-            return;
+        if (l.source().equals(listeningTo)) {
+            return; // listening already, or being set up
         }
         stopListening();
-        if (l.source() instanceof RecordSource.Server) {
-            try (Database db = l.source().open()) {
-                listening = db.listenForChanges(table -> javafx.application.Platform.runLater(() -> {
-                    if (table.isEmpty()) {
-                        error.set("The connection to " + l.source().title() + " was lost; saves will say so."
-                                + " Reopen it with Connect to a server….");
-                    } else {
-                        status.set("Changes saved at another desk: reloading …");
-                        reload();
-                    }
-                }));
-                listeningTo = l.source();
+        if (!(l.source() instanceof RecordSource.Server)) {
+            return;
+        }
+        RecordSource source = l.source();
+        listeningTo = source;
+        // the listening connection is made off the FX thread (a server may be slow to answer)
+        Thread setup = new Thread(() -> {
+            AutoCloseable got;
+            try (Database db = source.open()) {
+                got = db.listenForChanges(table -> javafx.application.Platform.runLater(() -> heard(source, table)));
             } catch (RuntimeException e) {
-                error.set("Changes saved at other desks will not show until you reload: " + Errors.describe(e));
+                javafx.application.Platform.runLater(() -> error.set("Changes saved at other desks will not show until"
+                        + " you reload: " + Errors.describe(e)));
+                return;
             }
+            javafx.application.Platform.runLater(() -> {
+                if (source.equals(listeningTo) && listening == null) {
+                    listening = got;
+                    hearingOthers.set(true);
+                } else {
+                    closeQuietly(got); // the window moved on meanwhile
+                }
+            });
+        }, "shapetrail-listen");
+        setup.setDaemon(true);
+        setup.start();
+    }
+
+    /** A change saved at another desk (a table's name), or the listening connection lost (""). */
+    private void heard(RecordSource source, String table) {
+        if (!source.equals(listeningTo)) {
+            return;
+        }
+        if (table.isEmpty()) {
+            hearingOthers.set(false);
+            error.set("The connection to " + source.title() + " was lost; saves will say so."
+                    + " Reopen it with Connect to a server….");
+        } else {
+            status.set("Changes saved at another desk: reloading …");
+            reload();
+        }
+    }
+
+    /** True while this window hears of changes saved at other desks (a server's record). */
+    public javafx.beans.property.ReadOnlyBooleanProperty hearingOthersProperty() {
+        return hearingOthers;
+    }
+
+    private static void closeQuietly(AutoCloseable c) {
+        try {
+            c.close();
+        } catch (Exception ignored) {
+            // the listener's connection is gone already
         }
     }
 
     private void stopListening() {
         if (listening != null) {
-            try {
-                listening.close();
-            } catch (Exception ignored) {
-                // the listener's connection is gone already
-            }
+            closeQuietly(listening);
             listening = null;
-            listeningTo = null;
         }
+        listeningTo = null;
+        hearingOthers.set(false);
     }
 
     /** Empty, or the sentence saying this window has the file read-only and why. */

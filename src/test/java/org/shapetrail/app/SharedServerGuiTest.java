@@ -108,6 +108,9 @@ class SharedServerGuiTest {
             assertTrue(newVisit.isVisible());
             assertFalse(measurerWindow.getScene().getRoot().lookup("#new-person").isVisible());
 
+            // the coach's window has begun to listen for other desks' saves (set up off the FX thread)
+            WorkbenchViewModel coachVm = (WorkbenchViewModel) coachWindow.getUserData();
+            WaitForAsyncUtils.waitFor(15, TimeUnit.SECONDS, () -> coachVm.hearingOthersProperty().get());
             String name = "Arlo Ashcombe"; // person 1 of the demo academy
             select(robot, coachWindow, name);
             int before = visits(coachWindow).getItems().size();
