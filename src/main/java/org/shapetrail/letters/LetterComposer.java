@@ -46,38 +46,41 @@ public final class LetterComposer {
     }
 
     private final HistoryBuilder builder;
-    /** Histories of block members, computed once per composer (a squad's letters share them). */
-    private final java.util.Map<Long, PersonHistory> histories = new java.util.concurrent.ConcurrentHashMap<>();
+    /** Histories of block members, computed once (a squad's letters share them, in every language). */
+    private final java.util.Map<Long, PersonHistory> histories;
     private final LetterSettings settings;
     /** The desk's locale: the language of a letter whose person has none of their own. */
     private final Locale deskLocale;
-    /** The letter being composed: its language (the person's, else the desk's), numbers and dates. */
-    private Locale locale;
-    private DateTimeFormatter dates;
-
     /** True when every letter is in the desk's language, whatever the person's (the letters command's --lang). */
     private final boolean oneLanguage;
+    /** The language, numbers and dates this composer writes in. */
+    private final Locale locale;
+    private final DateTimeFormatter dates;
 
     public LetterComposer(HistoryBuilder builder, LetterSettings settings, Locale locale) {
-        this(builder, settings, locale, false);
+        this(builder, new java.util.concurrent.ConcurrentHashMap<>(), settings, locale, false, locale);
     }
 
-    private LetterComposer(HistoryBuilder builder, LetterSettings settings, Locale locale, boolean oneLanguage) {
+    private LetterComposer(HistoryBuilder builder, java.util.Map<Long, PersonHistory> histories,
+            LetterSettings settings, Locale deskLocale, boolean oneLanguage, Locale locale) {
         this.builder = builder;
+        this.histories = histories;
         this.settings = settings;
-        this.deskLocale = locale;
+        this.deskLocale = deskLocale;
         this.oneLanguage = oneLanguage;
-        use(locale);
+        this.locale = locale;
+        this.dates = DateTimeFormatter.ofLocalizedDate(FormatStyle.LONG).withLocale(locale);
     }
 
     /** A composer that writes every letter in {@code language}, whatever language the people's letters are set to. */
     public LetterComposer allIn(Locale language) {
-        return new LetterComposer(builder, settings, language, true);
+        return new LetterComposer(builder, histories, settings, language, true, language);
     }
 
-    private void use(Locale l) {
-        this.locale = l;
-        this.dates = DateTimeFormatter.ofLocalizedDate(FormatStyle.LONG).withLocale(l);
+    /** The same composer writing in another language (sharing what it has computed). */
+    private LetterComposer in(Locale language) {
+        return language.equals(locale) ? this : new LetterComposer(builder, histories, settings, deskLocale, oneLanguage,
+                language);
     }
 
     private String n(double v, int d) {
@@ -95,10 +98,13 @@ public final class LetterComposer {
 
     /**
      * Composes the letter in the person's letter language (a family may read another language than the
-     * staff), else in the desk's. Not for use by two threads at once.
+     * staff), else in the desk's.
      */
-    public synchronized Letter compose(PersonHistory h) {
-        use(oneLanguage ? deskLocale : Messages.localeFor(h.person().letterLanguage(), deskLocale));
+    public Letter compose(PersonHistory h) {
+        return in(oneLanguage ? deskLocale : Messages.localeFor(h.person().letterLanguage(), deskLocale)).composeHere(h);
+    }
+
+    private Letter composeHere(PersonHistory h) {
         var p = h.person();
         String first = p.displayName().split(" ")[0];
         List<VisitResult> visits = h.visits().stream().filter(this::inPeriod).toList();
