@@ -1,7 +1,6 @@
 package org.shapetrail.store;
 
 import java.nio.file.Path;
-import java.util.Arrays;
 import java.util.Optional;
 
 /**
@@ -101,11 +100,6 @@ public sealed interface RecordSource permits RecordSource.LocalFile, RecordSourc
         @Override
         public String toString() {
             return "Server[" + address + "]"; // never the password
-        }
-
-        /** Whether the two passwords differ from each other (only for tests). */
-        boolean samePassword(char[] other) {
-            return Arrays.equals(password, other);
         }
     }
 }

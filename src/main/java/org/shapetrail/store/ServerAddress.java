@@ -103,6 +103,11 @@ public record ServerAddress(String host, int port, String database, String user,
         return URLDecoder.decode(s, StandardCharsets.UTF_8);
     }
 
+    /** The same record, logged in as another account. */
+    public ServerAddress withUser(String other) {
+        return new ServerAddress(host, port, database, other, options);
+    }
+
     /** The driver's URL for this address (no user or password in it; those go as properties). */
     public String jdbcUrl() {
         StringBuilder sb = new StringBuilder("jdbc:postgresql://").append(host.contains(":") ? "[" + host + "]" : host)

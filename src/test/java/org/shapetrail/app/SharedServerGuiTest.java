@@ -47,34 +47,20 @@ class SharedServerGuiTest {
 
     @BeforeAll
     static void academyOnTheServer() {
-        uri = TestServer.freshSchema("gui");
-        String tag = ProcessHandle.current().pid() + "_" + System.nanoTime() % 100000;
-        measurer = "mira_" + tag;
-        coach = "colm_" + tag;
-        try (Database owner = Database.open(uri)) {
-            DemoAcademy.generateInto(owner);
-            owner.accounts(a -> {
-                a.add(measurer, StaffRole.MEASURER, PASSWORD.toCharArray());
-                a.add(coach, StaffRole.COACH, PASSWORD.toCharArray());
-                return null;
-            });
-        }
+        uri = TestServer.sampleAcademy("gui");
+        measurer = TestServer.uniqueLogin("mira");
+        coach = TestServer.uniqueLogin("colm");
+        TestServer.addAccounts(uri, PASSWORD, java.util.Map.of(measurer, StaffRole.MEASURER, coach, StaffRole.COACH));
     }
 
     @AfterAll
     static void endAccounts() {
-        try (Database owner = Database.open(uri)) {
-            owner.accounts(a -> {
-                a.remove(measurer);
-                a.remove(coach);
-                return null;
-            });
-        }
+        TestServer.removeAccounts(uri, List.of(measurer, coach));
     }
 
     static RecordSource.Server as(String user) {
         ServerAddress base = ServerAddress.parse(uri);
-        return new RecordSource.Server(new ServerAddress(base.host(), base.port(), base.database(), user, base.options()),
+        return new RecordSource.Server(base.withUser(user),
                 PASSWORD.toCharArray());
     }
 

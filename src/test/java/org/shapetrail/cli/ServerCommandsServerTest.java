@@ -10,17 +10,13 @@ import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.shapetrail.store.Database;
 import org.shapetrail.store.TestServer;
-import org.shapetrail.store.demo.DemoAcademy;
 
 /** The server's commands (account, trail, erase-person) against the real PostgreSQL server .ci/run starts. */
 @Tag("server")
 class ServerCommandsServerTest {
     @Test
     void anAdministratorMakesAccountsReadsTheTrailAndErases() throws Exception {
-        String uri = TestServer.freshSchema("cli");
-        try (Database d = Database.open(uri)) {
-            DemoAcademy.generateInto(d);
-        }
+        String uri = TestServer.sampleAcademy("cli");
         String name = "ida_" + ProcessHandle.current().pid();
         InputStream stdin = System.in;
         String[] made;

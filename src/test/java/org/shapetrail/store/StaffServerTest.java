@@ -41,38 +41,23 @@ class StaffServerTest {
 
     @BeforeAll
     static void academyWithThreeAccounts() throws Exception {
-        uri = TestServer.freshSchema("staff");
+        uri = TestServer.sampleAcademy("staff");
         schema = TestServer.schemaOf(uri);
-        String tag = ProcessHandle.current().pid() + "_" + System.nanoTime() % 100000;
-        measurerA = "ana_" + tag;
-        measurerB = "ben_" + tag;
-        coach = "cleo_" + tag;
-        try (Database owner = Database.open(uri)) {
-            DemoAcademy.generateInto(owner);
-            owner.accounts(a -> {
-                a.add(measurerA, StaffRole.MEASURER, PASSWORD.toCharArray());
-                a.add(measurerB, StaffRole.MEASURER, PASSWORD.toCharArray());
-                a.add(coach, StaffRole.COACH, PASSWORD.toCharArray());
-                return null;
-            });
-        }
+        measurerA = TestServer.uniqueLogin("ana");
+        measurerB = TestServer.uniqueLogin("ben");
+        coach = TestServer.uniqueLogin("cleo");
+        TestServer.addAccounts(uri, PASSWORD, java.util.Map.of(measurerA, StaffRole.MEASURER, measurerB,
+                StaffRole.MEASURER, coach, StaffRole.COACH));
     }
 
     @AfterAll
     static void removeAccounts() {
-        try (Database owner = Database.open(uri)) {
-            owner.accounts(a -> {
-                for (String n : List.of(measurerA, measurerB, coach)) {
-                    a.remove(n);
-                }
-                return null;
-            });
-        }
+        TestServer.removeAccounts(uri, List.of(measurerA, measurerB, coach));
     }
 
     static Database as(String user) {
         ServerAddress base = ServerAddress.parse(uri);
-        return Database.connect(new ServerAddress(base.host(), base.port(), base.database(), user, base.options()),
+        return Database.connect(base.withUser(user),
                 PASSWORD.toCharArray());
     }
 
@@ -178,7 +163,7 @@ class StaffServerTest {
             Migrations.migrate(c, 0, 8);
         }
         ServerAddress base = ServerAddress.parse(older);
-        ServerAddress asMeasurer = new ServerAddress(base.host(), base.port(), base.database(), measurerA, base.options());
+        ServerAddress asMeasurer = base.withUser(measurerA);
         StoreException e = assertThrows(StoreException.class, () -> Database.connect(asMeasurer, PASSWORD.toCharArray()));
         assertTrue(e.getMessage().contains("is at schema 8 and this " + AppVersion.named() + " needs schema "
                 + Migrations.latest() + ". Only the record's owner may bring it up to date"), e.getMessage());

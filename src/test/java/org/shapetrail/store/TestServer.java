@@ -65,6 +65,44 @@ public final class TestServer {
         return DriverManager.getConnection(address().jdbcUrl(), p);
     }
 
+    /** The sample academy, written into a fresh schema; the URI that works in it. */
+    public static String sampleAcademy(String label) {
+        String uri = freshSchema(label);
+        try (Database owner = Database.open(uri)) {
+            org.shapetrail.store.demo.DemoAcademy.generateInto(owner);
+        }
+        return uri;
+    }
+
+    /** A login name no other test run uses (logins are the whole server's, not one schema's). */
+    public static String uniqueLogin(String first) {
+        return first + "_" + ProcessHandle.current().pid() + "_" + System.nanoTime() % 100000;
+    }
+
+    /** Makes staff accounts, each with its role, as the record's owner. */
+    public static void addAccounts(String uri, String password, java.util.Map<String, StaffRole> accounts) {
+        try (Database owner = Database.open(uri)) {
+            owner.accounts(a -> {
+                for (var e : accounts.entrySet()) {
+                    a.add(e.getKey(), e.getValue(), password.toCharArray());
+                }
+                return null;
+            });
+        }
+    }
+
+    /** Ends the accounts a test made. */
+    public static void removeAccounts(String uri, java.util.Collection<String> names) {
+        try (Database owner = Database.open(uri)) {
+            owner.accounts(a -> {
+                for (String n : names) {
+                    a.remove(n);
+                }
+                return null;
+            });
+        }
+    }
+
     /** The schema named in a URI made by {@link #freshSchema}. */
     public static String schemaOf(String uri) {
         return uri.substring(uri.indexOf("currentSchema=") + "currentSchema=".length());
