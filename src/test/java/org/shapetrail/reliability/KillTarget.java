@@ -26,19 +26,17 @@ public final class KillTarget {
 
     public static void main(String[] args) throws Exception {
         Operation op = Operation.valueOf(args[0]);
-        if (org.shapetrail.store.ServerAddress.isServer(args[1])) {
-            onServer(op, args);
-            return;
-        }
-        Path file = Path.of(args[1]);
-        if (op == Operation.MIGRATION) {
+        boolean server = org.shapetrail.store.ServerAddress.isServer(args[1]);
+        if (op == Operation.MIGRATION && !server) {
+            Path file = Path.of(args[1]);
             say("ready");
             long t0 = System.nanoTime();
             Database.open(file).close(); // opening an older file migrates it (after a copy beside it)
             say("done " + (System.nanoTime() - t0) / 1_000_000);
             return;
         }
-        try (Database db = Database.open(file)) {
+        // a file named by its path, or a record on a server (where import and visit save are the ones run)
+        try (Database db = server ? Database.open(args[1]) : Database.open(Path.of(args[1]))) {
             say("ready");
             long t0 = System.nanoTime();
             switch (op) {
@@ -47,20 +45,6 @@ public final class KillTarget {
                 case ERASE -> db.erasePerson(1);
                 case RESTORE -> db.restoreFrom(Path.of(args[2]));
                 default -> throw new IllegalStateException(op.toString());
-            }
-            say("done " + (System.nanoTime() - t0) / 1_000_000);
-        }
-    }
-
-    /** The same operations on a record on a server (import and visit save; the others are the file's own). */
-    private static void onServer(Operation op, String[] args) throws Exception {
-        try (Database db = Database.open(args[1])) {
-            say("ready");
-            long t0 = System.nanoTime();
-            switch (op) {
-                case IMPORT -> Importer.importFile(db, Path.of(args[2]), new ImportOptions(null, false, true), null);
-                case VISIT_SAVE -> db.inTransaction(tx -> tx.visits().insert(visitOf(tx.measurers().all().get(0).id())));
-                default -> throw new IllegalStateException(op + " is not run on a server");
             }
             say("done " + (System.nanoTime() - t0) / 1_000_000);
         }
