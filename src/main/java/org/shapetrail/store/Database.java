@@ -27,6 +27,10 @@ public final class Database implements AutoCloseable {
     /** Milliseconds a write waits for another process's lock before giving up with {@link FileBusyException}. */
     public static final int BUSY_TIMEOUT_MS = 5000;
 
+    /** A change refused for a missing or still-used reference, in the same words on both engines. */
+    private static final String FOREIGN_KEY = "That change would leave a reference to a record that does not exist"
+            + " (or remove one that others still refer to); nothing was changed.";
+
     /** The oldest PostgreSQL release Shapetrail is tested on or expects to work with. */
     public static final int OLDEST_SERVER = 13;
 
@@ -154,15 +158,24 @@ public final class Database implements AutoCloseable {
                     + firstLine(e.getMessage()) + "). Check the host and port in the address, that the server is"
                     + " running and that this desk may connect to it. Nothing was written.", e);
         }
+        return inSession(a.toString(), e);
+    }
+
+    /** What the server refused once connected, said as what to fix: rights, the record's rules, anything else. */
+    private static StoreException inSession(String record, SQLException e) {
+        String state = e.getSQLState() == null ? "" : e.getSQLState();
         if (state.equals("42501")) {
-            return new StoreException("The server refused this as beyond what " + a.user() + " may do ("
+            return new StoreException("The server refused this: beyond what your account may do ("
                     + firstLine(e.getMessage()) + "). Nothing was changed.", e);
+        }
+        if (state.equals("23503")) {
+            return new StoreException(FOREIGN_KEY, e);
         }
         if (state.startsWith("23")) {
             return new StoreException("That change would break a rule of the record (" + firstLine(e.getMessage())
                     + "); nothing was changed.", e);
         }
-        return new StoreException("The record at " + a + " could not be used: " + firstLine(e.getMessage())
+        return new StoreException("The record at " + record + " could not be used: " + firstLine(e.getMessage())
                 + ". Nothing was changed.", e);
     }
 
@@ -740,20 +753,7 @@ public final class Database implements AutoCloseable {
                         + firstLine(e.getMessage()) + "); nothing of this change was saved. Check the network and"
                         + " try again.", e);
             }
-            if (state.equals("42501")) {
-                return new StoreException("The server refused this: beyond what your account may do ("
-                        + firstLine(e.getMessage()) + "). Nothing was changed.", e);
-            }
-            if (state.equals("23503")) { // the same words as for a file
-                return new StoreException("That change would leave a reference to a record that does not exist"
-                        + " (or remove one that others still refer to); nothing was changed.", e);
-            }
-            if (state.startsWith("23")) {
-                return new StoreException("That change would break a rule of the record (" + firstLine(e.getMessage())
-                        + "); nothing was changed.", e);
-            }
-            return new StoreException("The record at " + name + " could not be used: " + firstLine(e.getMessage())
-                    + ". Nothing was changed.", e);
+            return inSession(name, e);
         }
         return translate(file.toString(), e);
     }
@@ -766,8 +766,7 @@ public final class Database implements AutoCloseable {
                 return new FileBusyException(file, e);
             }
             if (code.name().startsWith("SQLITE_CONSTRAINT_FOREIGNKEY")) {
-                return new StoreException("That change would leave a reference to a record that does not exist"
-                        + " (or remove one that others still refer to); nothing was changed.", e);
+                return new StoreException(FOREIGN_KEY, e);
             }
             if (code == SQLiteErrorCode.SQLITE_NOTADB) {
                 return new StoreException("The file " + file + " is not a Shapetrail database (nor any SQLite file);"
