@@ -21,7 +21,7 @@ import org.shapetrail.store.StoreException;
  * before the dialog closes; the connection itself is made by the workbench, which says what went wrong.
  */
 final class ServerConnectDialog {
-    private static final Preferences PREFS = Preferences.userRoot().node("org/shapetrail/app");
+    private static final Preferences PREFS = ShapetrailApp.PREFS;
     static final String LAST_SERVER = "lastServer";
 
     private ServerConnectDialog() {

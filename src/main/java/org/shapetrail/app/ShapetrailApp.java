@@ -17,7 +17,8 @@ import org.shapetrail.store.DataFolder;
 
 /** The JavaFX application: builds the workbench window, remembers its size and the last file. */
 public final class ShapetrailApp extends Application {
-    private static final Preferences PREFS = Preferences.userRoot().node("org/shapetrail/app");
+    /** The window's settings (size, the last record opened, the last server): never a measurement or a password. */
+    static final Preferences PREFS = Preferences.userRoot().node("org/shapetrail/app");
     /** The start file read while the toolkit starts (see {@link #preload}), or null. */
     private static volatile java.util.concurrent.CompletableFuture<Loaded> preloaded;
     private static volatile RecordSource preloadedFile;
@@ -70,10 +71,6 @@ public final class ShapetrailApp extends Application {
      * The file named by {@code --db FILE} or passed alone (a double click on an academy file), else the last
      * one opened, else the default (seeded with the demo).
      */
-    static Path chooseStartFile(List<String> args) {
-        return chooseStart(args).file().orElse(null);
-    }
-
     /**
      * Where the window starts: the file or server named by {@code --db}, a file passed alone (a double click
      * on an academy file), else the last record opened (a server's address is remembered without its

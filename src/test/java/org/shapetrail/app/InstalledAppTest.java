@@ -31,7 +31,7 @@ class InstalledAppTest {
         Path f = Files.writeString(dir.resolve("north-shore.shapetrail"), "");
         String[] args = {f.toString()};
         assertFalse(ShapetrailCli.wantsCommandLine(args));
-        assertEquals(f, ShapetrailApp.chooseStartFile(List.of(args)));
+        assertEquals(f, ShapetrailApp.chooseStart(List.of(args)).file().orElseThrow());
     }
 
     @Test
