@@ -2,20 +2,18 @@ package org.shapetrail.app;
 
 /** Age bands of the people filter, by age at the latest visit. */
 public enum AgeBand {
-    ALL("All ages", 0, 200),
-    JUNIORS("Juniors (under 18)", 0, 18),
-    UNDER_12("Under 12", 0, 12),
-    FROM_12_TO_13("12–13", 12, 14),
-    FROM_14_TO_15("14–15", 14, 16),
-    FROM_16_TO_17("16–17", 16, 18),
-    ADULT("18 and over", 18, 200);
+    ALL(0, 200),
+    JUNIORS(0, 18),
+    UNDER_12(0, 12),
+    FROM_12_TO_13(12, 14),
+    FROM_14_TO_15(14, 16),
+    FROM_16_TO_17(16, 18),
+    ADULT(18, 200);
 
-    private final String label;
     private final double from;
     private final double below;
 
-    AgeBand(String label, double from, double below) {
-        this.label = label;
+    AgeBand(double from, double below) {
         this.from = from;
         this.below = below;
     }
@@ -26,6 +24,6 @@ public enum AgeBand {
 
     @Override
     public String toString() {
-        return label;
+        return org.shapetrail.i18n.Messages.tr("ageband." + name());
     }
 }

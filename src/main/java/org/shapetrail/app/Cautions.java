@@ -1,11 +1,14 @@
 package org.shapetrail.app;
 
-/** The standing cautions the product shows (DESIGN.md §5). */
-public final class Cautions {
-    public static final String SHAPE_NOT_WORTH = "The somatotype describes present body shape. It is not a judgement"
-            + " of health, fitness or worth. Shapetrail supports, and never replaces, the judgement of a qualified"
-            + " practitioner; local safeguarding and data-protection rules come first.";
+import org.shapetrail.i18n.Messages;
 
+/** The standing cautions the product shows (DESIGN.md §5), in the window's language. */
+public final class Cautions {
     private Cautions() {
+    }
+
+    /** The somatotype describes present shape, judges no one, and defers to a practitioner and local rules. */
+    public static String shapeNotWorth() {
+        return Messages.tr("caution.shape");
     }
 }

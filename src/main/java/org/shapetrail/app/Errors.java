@@ -16,9 +16,9 @@ final class Errors {
             c = c.getCause();
         }
         if (t instanceof InterruptedException) {
-            return "The work was cancelled.";
+            return org.shapetrail.i18n.Messages.tr("error.cancelled");
         }
-        return "Something went wrong (" + t.getClass().getSimpleName() + (t.getMessage() == null ? "" : ": "
-                + t.getMessage()) + "). Nothing was saved.";
+        return org.shapetrail.i18n.Messages.tr("error.unexpected", t.getClass().getSimpleName()
+                + (t.getMessage() == null ? "" : ": " + t.getMessage()));
     }
 }

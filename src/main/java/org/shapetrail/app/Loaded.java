@@ -19,7 +19,7 @@ public record Loaded(RecordSource source, HistoryBuilder builder, Map<Long, Pers
         if (source.file().isPresent()) {
             return "";
         }
-        return actor + " (" + role.map(StaffRole::word).orElse("reading only") + ")";
+        return actor + " (" + role.map(StaffRole::shown).orElse(org.shapetrail.i18n.Messages.tr("role.reading")) + ")";
     }
 
     /** Whether this desk may enter visits and edit its own. */

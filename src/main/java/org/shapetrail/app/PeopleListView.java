@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import javafx.collections.ListChangeListener;
 import javafx.geometry.Insets;
 import javafx.scene.Parent;
@@ -24,7 +26,7 @@ final class PeopleListView {
         WorkbenchViewModel vm = ctx.vm;
         TextField search = new TextField();
         search.setId("search");
-        search.setPromptText("Find a person (Ctrl+F)");
+        search.setPromptText(tr("people.search"));
         search.textProperty().bindBidirectional(vm.searchProperty());
         ComboBox<String> squad = new ComboBox<>(vm.squads());
         squad.setId("squad-filter");
@@ -40,7 +42,7 @@ final class PeopleListView {
         maturity.setConverter(new StringConverter<>() {
             @Override
             public String toString(MaturityStatus m) {
-                return m == null ? "Any maturity" : m.words();
+                return m == null ? tr("people.anyMaturity") : m.words();
             }
 
             @Override
@@ -49,7 +51,7 @@ final class PeopleListView {
             }
         });
         maturity.valueProperty().bindBidirectional(vm.maturityProperty());
-        CheckBox rapid = new CheckBox("Rapid growth only");
+        CheckBox rapid = new CheckBox(tr("people.rapidOnly"));
         rapid.setId("rapid-filter");
         rapid.selectedProperty().bindBidirectional(vm.rapidOnlyProperty());
         PeopleTable people = new PeopleTable("people", ctx.locale, false, vm.rows());
@@ -69,8 +71,7 @@ final class PeopleListView {
         period.setId("period-choice");
         period.getItems().setAll(Period.Kind.values());
         period.setValue(Period.Kind.LATEST);
-        period.setTooltip(new javafx.scene.control.Tooltip("The span of the change column: each person's first rated"
-                + " visit in it against their last"));
+        period.setTooltip(new javafx.scene.control.Tooltip(tr("people.period.tip")));
         javafx.scene.control.DatePicker from = DatePickers.of(java.time.LocalDate.now().minusMonths(6), ctx.locale);
         from.setId("period-from");
         javafx.scene.control.DatePicker to = DatePickers.of(java.time.LocalDate.now(), ctx.locale);
@@ -94,7 +95,7 @@ final class PeopleListView {
                     case BETWEEN -> new Period(k, from.getValue(), to.getValue());
                 };
             } catch (RuntimeException e) {
-                vm.errorProperty().set("Choose a first day on or before the last day for the change column.");
+                vm.errorProperty().set(tr("people.period.order"));
                 return;
             }
             vm.errorProperty().set("");
@@ -105,15 +106,15 @@ final class PeopleListView {
         from.valueProperty().addListener((o, a, b) -> apply.run());
         to.valueProperty().addListener((o, a, b) -> apply.run());
         apply.run();
-        Button newPerson = new Button("New person…");
+        Button newPerson = new Button(tr("people.new"));
         newPerson.setId("new-person");
         newPerson.setOnAction(e -> ctx.personForm(null));
         Label count = new Label();
         count.setId("people-count");
         vm.rows().addListener((ListChangeListener<PersonRow>) c -> count.setText(
-                vm.rows().size() + " shown · ▲ rapid growth · click a column to sort (Growth or the change: largest first)"));
+                tr("people.count", vm.rows().size())));
         HBox filters = new HBox(6, squad, age, maturity);
-        HBox periodLine = new HBox(6, new Label("Change over"), period, from, to);
+        HBox periodLine = new HBox(6, new Label(tr("people.changeOver")), period, from, to);
         periodLine.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
         root = new VBox(6, search, filters, periodLine, new HBox(12, rapid, newPerson), table, count);
         root.setPadding(new Insets(8));

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.Comparator;
 import java.util.Locale;
 import java.util.function.Function;
@@ -27,18 +29,17 @@ final class PeopleTable {
     PeopleTable(String id, Locale locale, boolean compact, ObservableList<PersonRow> rows) {
         this.locale = locale;
         table.setId(id);
-        table.setPlaceholder(new Label("Nobody matches"));
+        table.setPlaceholder(new Label(tr("people.none")));
         SortedList<PersonRow> sorted = new SortedList<>(rows);
         sorted.comparatorProperty().bind(table.comparatorProperty());
         table.setItems(sorted);
-        add(text("Name", PersonRow::name), PersonRow::name, "Name", "The person's name; click to open their page.");
+        add(text(PersonRow::name), PersonRow::name, tr("people.col.name"), tr("people.col.name.tip"), false);
         TableColumn<PersonRow, PersonRow> age = custom(PersonRow::age, r -> Numbers.fmt(locale, r.age(), 1));
-        add(age, r -> Numbers.fmt(locale, r.age(), 1), "Age", "Decimal age at the latest visit, years.");
+        add(age, r -> Numbers.fmt(locale, r.age(), 1), tr("people.col.age"), tr("people.col.age.tip"), false);
         if (!compact) {
-            add(text("Squad", PersonRow::squad), PersonRow::squad, "Squad", "The squad the person belongs to today.");
+            add(text(PersonRow::squad), PersonRow::squad, tr("people.col.squad"), tr("people.col.squad.tip"), false);
         }
-        add(text("Rating", PersonRow::rating), PersonRow::rating, "Rating",
-                "The latest somatotype: its Heath-Carter rating, endomorphy-mesomorphy-ectomorphy.");
+        add(text(PersonRow::rating), PersonRow::rating, tr("people.col.rating"), tr("people.col.rating.tip"), false);
         TableColumn<PersonRow, PersonRow> change = custom(PersonRow::multiple, this::changeText);
         change.setCellFactory(c -> new TableCell<>() {
             @Override
@@ -52,9 +53,8 @@ final class PeopleTable {
                 }
                 // the verdict in words, so nothing depends on colour alone
                 setText(changeText(r));
-                setTooltip(new Tooltip(r.changeFrom() + " → " + r.changeTo() + ": moved SAD " + Numbers.fmt(locale,
-                        r.change().sad(), 2) + " somatotype units; the change is " + r.change().multipleText(locale)
-                        + " times the noise limit (1.00 or more: beyond noise)"));
+                setTooltip(new Tooltip(tr("people.change.tip", r.changeFrom(), r.changeTo(),
+                        Numbers.fmt(locale, r.change().sad(), 2), r.change().multipleText(locale))));
                 getStyleClass().add(switch (r.verdict()) {
                     case BEYOND_NOISE -> "beyond";
                     case BORDERLINE -> "borderline";
@@ -62,7 +62,7 @@ final class PeopleTable {
                 });
             }
         });
-        changeHeader = fitted.add(change, this::changeText, "Latest\nchange", changeTip(), true);
+        changeHeader = fitted.add(change, this::changeText, tr("people.col.change"), changeTip(), true);
         table.getColumns().add(change);
         TableColumn<PersonRow, PersonRow> growth = custom(PersonRow::velocity, this::growthText);
         growth.setCellFactory(c -> new TableCell<>() {
@@ -80,12 +80,10 @@ final class PeopleTable {
                 }
             }
         });
-        add(growth, this::growthText, "Growth\ncm/y", "Stature velocity at the latest visit, cm a year; with its error"
-                + " (±) when it rests on less than six months. ▲ rapid growth: above the alert threshold over six"
-                + " months or more.");
-        add(text("Maturity", r -> r.maturity() == null ? "" : r.maturity().words()),
-                r -> r.maturity() == null ? "" : r.maturity().words(), "Maturity",
-                "Maturity status from the estimated maturity offset (about ±0.6 years of error).");
+        add(growth, this::growthText, tr("people.col.growth"), tr("people.col.growth.tip"), true);
+        add(text(r -> r.maturity() == null ? "" : r.maturity().words()),
+                r -> r.maturity() == null ? "" : r.maturity().words(), tr("people.col.maturity"),
+                tr("people.col.maturity.tip"), false);
         rows.addListener((javafx.collections.ListChangeListener<PersonRow>) c -> fitWidths());
         // the first click on the change or growth column puts the largest first (the table would start ascending)
         table.getSortOrder().addListener((javafx.collections.ListChangeListener<TableColumn<PersonRow, ?>>) c -> {
@@ -113,9 +111,7 @@ final class PeopleTable {
     }
 
     private static String changeTip() {
-        return "The noise multiple of the change over the period and the verdict it reads as: 1.00 or more is beyond"
-                + " noise (\"beyond\"), 0.77 to 0.99 borderline, below that within noise (\"within\"). Hover a cell for the dates and the distance moved (SAD, in"
-                + " somatotype units, the same units as the ratings). The first click sorts the largest first.";
+        return tr("people.change.tip.long");
     }
 
     TableView<PersonRow> table() {
@@ -130,7 +126,7 @@ final class PeopleTable {
         fitWidths();
     }
 
-    private static TableColumn<PersonRow, String> text(String name, Function<PersonRow, String> f) {
+    private static TableColumn<PersonRow, String> text(Function<PersonRow, String> f) {
         TableColumn<PersonRow, String> c = new TableColumn<>();
         c.setCellValueFactory(d -> new SimpleObjectProperty<>(f.apply(d.getValue())));
         return c;
@@ -155,8 +151,9 @@ final class PeopleTable {
         return c;
     }
 
-    private void add(TableColumn<PersonRow, ?> c, Function<PersonRow, String> text, String header, String tip) {
-        fitted.add(c, text, header, tip, header.startsWith("Growth"));
+    private void add(TableColumn<PersonRow, ?> c, Function<PersonRow, String> text, String header, String tip,
+                     boolean boldCells) {
+        fitted.add(c, text, header, tip, boldCells);
         table.getColumns().add(c);
     }
 

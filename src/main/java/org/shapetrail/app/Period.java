@@ -18,21 +18,11 @@ import java.util.Objects;
 public record Period(Kind kind, LocalDate from, LocalDate to) {
     /** The choices of the period. */
     public enum Kind {
-        LATEST("Latest change"),
-        SEASON("This season"),
-        YEAR("Last 12 months"),
-        SINCE("Since a date…"),
-        BETWEEN("Between two dates…");
-
-        private final String words;
-
-        Kind(String words) {
-            this.words = words;
-        }
+        LATEST, SEASON, YEAR, SINCE, BETWEEN;
 
         @Override
         public String toString() {
-            return words;
+            return org.shapetrail.i18n.Messages.tr("period." + name());
         }
     }
 
@@ -66,9 +56,9 @@ public record Period(Kind kind, LocalDate from, LocalDate to) {
     public String header(Locale locale) {
         DateTimeFormatter f = DateTimeFormatter.ofLocalizedDate(FormatStyle.MEDIUM).withLocale(locale);
         return switch (kind) {
-            case LATEST -> "Latest change";
-            case SEASON, YEAR, SINCE -> "Change since " + from.format(f);
-            case BETWEEN -> "Change " + from.format(f) + " to " + to.format(f);
+            case LATEST -> org.shapetrail.i18n.Messages.tr("period.LATEST");
+            case SEASON, YEAR, SINCE -> org.shapetrail.i18n.Messages.tr("period.header.since", from.format(f));
+            case BETWEEN -> org.shapetrail.i18n.Messages.tr("period.header.between", from.format(f), to.format(f));
         };
     }
 }

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.time.format.DateTimeFormatter;
 import java.time.format.FormatStyle;
 import java.util.ArrayList;
@@ -26,51 +28,53 @@ public record PersonPage(String title, List<String> profile, String latestChange
         DateTimeFormatter dates = DateTimeFormatter.ofLocalizedDate(FormatStyle.MEDIUM).withLocale(locale);
         List<String> profile = new ArrayList<>();
         var p = h.person();
-        String age = h.latest().map(v -> Numbers.fmt(locale, v.ageYears(), 1) + " years").orElse("no visits yet");
-        profile.add(String.join(" · ", List.of(age, p.sex() == org.shapetrail.measure.Sex.FEMALE ? "female" : "male",
-                squad.isEmpty() ? "no current squad" : squad, "born " + p.birthDate().format(dates))));
+        String age = h.latest().map(v -> tr("person.age", Numbers.fmt(locale, v.ageYears(), 1)))
+                .orElse(tr("person.noVisitsYet"));
+        profile.add(String.join(" · ", List.of(age, tr(p.sex() == org.shapetrail.measure.Sex.FEMALE ? "person.female"
+                : "person.male"), squad.isEmpty() ? tr("person.noSquad") : squad,
+                tr("person.born", p.birthDate().format(dates)))));
         GrowthSummary g = h.growth();
         boolean adult = h.latest().map(v -> v.ageYears() >= 18).orElse(false);
         g.velocity().filter(v -> !adult).ifPresent(v -> {
-            String line = "Stature velocity " + velocity(v, locale);
+            String line = velocity(v, locale);
             if (v.shortInterval()) {
                 // common practice: a velocity is read over six months or more (Velocity.ALERT_MIN_DAYS)
-                line += " (under six months: a wide error, never the alert on its own)"
-                        + g.longerVelocity().map(l -> "; " + velocity(l, locale)).orElse("");
+                line = tr("person.velocity.short", line, g.longerVelocity().map(l -> "; " + velocity(l, locale))
+                        .orElse(""));
             }
-            profile.add(line + (g.rapidGrowth() ? " — RAPID GROWTH" : ""));
+            profile.add(tr("person.velocity", line) + (g.rapidGrowth() ? rapidMark() : ""));
             if (g.rapidGrowth()) {
-                profile.add(GrowthAlert.CAUTION);
+                profile.add(GrowthAlert.caution());
             }
         });
         if (!adult && !g.otherVelocities().isEmpty()) {
             List<String> parts = new ArrayList<>();
-            g.otherVelocities().forEach((what, v) -> parts.add(what + " " + Numbers.fmt(locale, v.perYear(), 1) + " ± "
-                    + Numbers.fmt(locale, v.sePerYear(), 1) + (what.equals("body mass") ? " kg" : " cm") + "/year"));
-            profile.add("Also: " + String.join("; ", parts));
+            g.otherVelocities().forEach((what, v) -> parts.add(tr(what.equals(GrowthSummary.OTHER.get(2)) ? "person.other.kg"
+                    : "person.other.cm", tr("growth.other." + what.replace(' ', '_')), Numbers.fmt(locale, v.perYear(), 1),
+                    Numbers.fmt(locale, v.sePerYear(), 1))));
+            profile.add(tr("person.also", String.join("; ", parts)));
         }
         MaturityEstimate m = g.maturity();
         if (m != null) {
-            profile.add("Maturity: " + m.summary() + ". " + MaturityEstimate.CAUTION);
+            profile.add(tr("person.maturity", m.summary(), MaturityEstimate.caution()));
         }
         if (!adult) {
-            profile.add("Observed growth spurt: " + g.observedPhv().describe()
+            profile.add(tr("person.spurt", g.observedPhv().describe())
                     + g.spurtDisagreement().map(s -> ". " + s).orElse(""));
         }
         if (g.midParentTargetCm() != null) {
-            profile.add("Mid-parent target height " + Numbers.fmt(locale, g.midParentTargetCm(), 1) + " cm; "
-                    + Numbers.fmt(locale, g.percentOfTarget(), 1) + " % reached (Tanner et al. 1970; a guide only)");
+            profile.add(tr("person.target", Numbers.fmt(locale, g.midParentTargetCm(), 1),
+                    Numbers.fmt(locale, g.percentOfTarget(), 1)));
         }
         if (g.predictedAdultCm() != null) {
-            profile.add("Predicted adult stature " + Numbers.fmt(locale, g.predictedAdultCm(), 1) + " cm (entered); "
-                    + Numbers.fmt(locale, g.percentOfPredicted(), 1) + " % reached — bio-banding band "
-                    + g.band().words() + " (common practice; a guide only)");
+            profile.add(tr("person.predicted", Numbers.fmt(locale, g.predictedAdultCm(), 1),
+                    Numbers.fmt(locale, g.percentOfPredicted(), 1), g.band().shown()));
         }
         if (!p.consent().photographs()) {
-            profile.add("Photographs: off (no consent recorded)");
+            profile.add(tr("person.photos.off"));
         }
-        String latest = h.latestChange().map(c -> "Since " + c.from().visit().measuredAt().toLocalDate().format(dates)
-                + ": " + words(c.verdict(), locale)).orElse("No change to judge yet: fewer than two rated visits.");
+        String latest = h.latestChange().map(c -> tr("person.since", c.from().visit().measuredAt().toLocalDate()
+                .format(dates), words(c.verdict(), locale))).orElse(tr("person.noChange"));
         List<VisitLine> lines = new ArrayList<>();
         for (VisitResult r : h.visits()) {
             var change = h.changeInto(r.visit().id());
@@ -78,9 +82,9 @@ public record PersonPage(String title, List<String> profile, String latestChange
                     Numbers.fmt(locale, r.ageYears(), 1), r.measurer().name(), r.visit().context(),
                     r.value(Site.STATURE).map(x -> Numbers.fmt(locale, x, 1)).orElse(""),
                     r.value(Site.BODY_MASS).map(x -> Numbers.fmt(locale, x, 1)).orElse(""),
-                    r.rating().map(s -> s.rating().toDisplayString()).orElse("—"),
-                    r.rating().map(s -> s.category().displayName()).orElse(r.missing().isEmpty() ? ""
-                            : "not rated: " + r.missing().get(0).message()),
+                    r.rating().map(s -> s.rating().toDisplayString(locale)).orElse("—"),
+                    r.rating().map(s -> s.category().shown()).orElse(r.missing().isEmpty() ? ""
+                            : tr("person.notRated", r.missing().get(0).message())),
                     change.map(c -> Numbers.fmt(locale, c.verdict().sad(), 2)).orElse(""),
                     change.map(c -> cell(c.verdict(), locale)).orElse("")));
         }
@@ -89,8 +93,13 @@ public record PersonPage(String title, List<String> profile, String latestChange
 
     /** E.g. "6.1 ± 1.4 cm/year over 0.30 years". */
     static String velocity(org.shapetrail.growth.Velocity v, Locale locale) {
-        return Numbers.fmt(locale, v.perYear(), 1) + " ± " + Numbers.fmt(locale, v.sePerYear(), 1) + " cm/year over "
-                + Numbers.fmt(locale, v.intervalYears(), 2) + " years";
+        return tr("person.velocity.value", Numbers.fmt(locale, v.perYear(), 1), Numbers.fmt(locale, v.sePerYear(), 1),
+                Numbers.fmt(locale, v.intervalYears(), 2));
+    }
+
+    /** Ends the velocity line of a person growing fast. */
+    static String rapidMark() {
+        return tr("person.rapid");
     }
 
     /**
@@ -98,27 +107,21 @@ public record PersonPage(String title, List<String> profile, String latestChange
      * TEM). Distance moved: SAD 0.27", with a sentence when the distance alone would suggest otherwise.
      */
     public static String words(ChangeVerdict v, Locale locale) {
-        String s = v.verdict().words() + ": the change is " + v.multipleText(locale) + " times the noise limit (1.00 is"
-                + " the limit; " + v.basis() + "). Distance moved: SAD " + Numbers.fmt(locale, v.sad(), 2);
+        String s = tr("verdict.sentence", v.verdict().shown(), v.multipleText(locale), v.basis(),
+                Numbers.fmt(locale, v.sad(), 2));
         if (v.sadAloneDisagrees()) {
-            s += v.verdict() == org.shapetrail.noise.Verdict.BEYOND_NOISE
-                    ? ". A short move, but in a direction the measurer's repeat error rarely takes"
-                    : ". A long move, but in the direction the measurer's repeat error takes most";
+            s += tr(v.verdict() == org.shapetrail.noise.Verdict.BEYOND_NOISE ? "verdict.shortLong" : "verdict.longShort");
         }
         return s;
     }
 
     /** A narrow cell: the shown noise multiple and one word of the verdict, e.g. "1.43× beyond" (list tables). */
     public static String shortCell(ChangeVerdict v, Locale locale) {
-        return v.multipleText(locale) + "× " + switch (v.verdict()) {
-            case BEYOND_NOISE -> "beyond";
-            case BORDERLINE -> "borderline";
-            case WITHIN_NOISE -> "within";
-        };
+        return v.multipleText(locale) + "× " + tr("verdict.short." + v.verdict().name());
     }
 
     /** A table cell: the shown noise multiple and the verdict it reads as, e.g. "1.43× beyond noise". */
     public static String cell(ChangeVerdict v, Locale locale) {
-        return v.multipleText(locale) + "× " + v.verdict().words();
+        return v.multipleText(locale) + "× " + v.verdict().shown();
     }
 }

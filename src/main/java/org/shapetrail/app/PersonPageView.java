@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import org.shapetrail.store.RecordSource;
 import java.nio.file.Path;
 import java.time.LocalDate;
@@ -31,7 +33,7 @@ import org.shapetrail.store.Visit;
  */
 final class PersonPageView {
     /** The choice in "Move to squad" for someone who leaves: their memberships end on the chosen day. */
-    private static final Squad LEAVES = new Squad(-1, "No squad (leaves)");
+    private static final Squad LEAVES = new Squad(-1, tr("person.leaves"));
 
     private final WorkbenchContext ctx;
     private final PersonPane pane = new PersonPane();
@@ -49,8 +51,9 @@ final class PersonPageView {
         pane.undo.setDisable(true);
         pane.editPerson.setOnAction(e -> ctx.vm.selectedHistory().ifPresent(h -> ctx.personForm(h.person())));
         pane.moveSquad.setOnAction(e -> ctx.vm.selectedHistory().ifPresent(h -> moveToSquad(h.person())));
-        pane.previewLetter.setOnAction(e -> previewLetter(new LetterSettings("Saltmarsh Bay Sports Academy",
-                "the academy physiotherapist", "", "via the academy office", LocalDate.now().minusYears(1),
+        pane.previewLetter.setOnAction(e -> previewLetter(new LetterSettings(
+                "Saltmarsh Bay Sports Academy", // not words: the sample academy's name
+                tr("preview.role"), "", tr("preview.contact"), LocalDate.now().minusYears(1),
                 LocalDate.now(), false)));
     }
 
@@ -99,18 +102,18 @@ final class PersonPageView {
             try {
                 before = OffFxThread.call(ctx.storing, () -> VisitSnapshot.read(file, shown.id()));
             } catch (RuntimeException e) {
-                ctx.vm.errorProperty().set("The visit cannot be edited now: " + Errors.describe(e));
+                ctx.vm.errorProperty().set(tr("visit.cannotEdit", Errors.describe(e)));
                 return;
             }
             if (before.isEmpty()) {
-                ctx.vm.errorProperty().set("The visit of " + line.date() + " is no longer there; reloading.");
+                ctx.vm.errorProperty().set(tr("visit.gone", line.date()));
                 ctx.vm.reload();
                 return;
             }
             // the form shows the visit as just read, and saves against that version (not the loaded page's)
             Optional<Visit> after = entryFor(before.get().visit(), before.get().stamp()).showAndWait();
             if (after.isPresent()) {
-                pushUndo("the edit of the visit of " + line.date(), () -> before.get().restoreEdited(file));
+                pushUndo(tr("undo.edit", line.date()), () -> before.get().restoreEdited(file));
                 ctx.vm.reload();
             }
         });
@@ -128,17 +131,16 @@ final class PersonPageView {
                 try (Database db = file.open()) {
                     if (db.engine() == org.shapetrail.store.Engine.SQLITE) {
                         var stamp = db.inTransaction(tx -> tx.visits().stamp(line.visitId()));
-                        return "A file has no accounts and keeps no audit trail (a record on a server does).\n\n"
-                                + stamp.map(st -> st.changedBy().isEmpty() ? "This visit has not been changed since it"
-                                        + " was entered." : "Last changed by " + st.changedBy() + " at "
-                                        + st.changedAt().replace('T', ' ').replace("Z", " UTC") + " (change "
-                                        + (st.version() - 1) + ").").orElse("The visit is no longer in the file.");
+                        return tr("history.file") + "\n\n"
+                                + stamp.map(st -> st.changedBy().isEmpty() ? tr("history.unchanged")
+                                        : tr("history.changed", st.changedBy(), st.changedAt().replace('T', ' ')
+                                        .replace("Z", " UTC"), st.version() - 1)).orElse(tr("history.gone")); // not words: the time zone
                     }
                     return org.shapetrail.store.AuditEntry.asText(db.inTransaction(tx -> tx.trail().ofVisit(line.visitId())));
                 }
             });
         } catch (RuntimeException e) {
-            ctx.vm.errorProperty().set("The visit's history cannot be read now: " + Errors.describe(e));
+            ctx.vm.errorProperty().set(tr("history.unreadable", Errors.describe(e)));
             return;
         }
         javafx.scene.control.TextArea area = new javafx.scene.control.TextArea(text);
@@ -146,10 +148,10 @@ final class PersonPageView {
         area.setEditable(false);
         area.setWrapText(false);
         area.setPrefSize(760, 420);
-        area.setStyle("-fx-font-family: monospace;");
+        area.setStyle("-fx-font-family: monospace;"); // not words: a style
         Alert a = new Alert(Alert.AlertType.INFORMATION, null, ButtonType.CLOSE);
-        a.setHeaderText("History of the visit of " + line.date());
-        a.setTitle("Visit history");
+        a.setHeaderText(tr("history.header", line.date()));
+        a.setTitle(tr("history.title"));
         a.getDialogPane().setContent(area);
         a.initOwner(ctx.window());
         a.getDialogPane().getStylesheets().addAll(ctx.window().getScene().getStylesheets());
@@ -158,9 +160,8 @@ final class PersonPageView {
 
     private void deleteVisit(VisitLine line) {
         stored(line).ifPresent(v -> {
-            Alert a = new Alert(Alert.AlertType.CONFIRMATION, "Delete the visit of " + line.date() + " with all its"
-                    + " trials? You can undo this until you close Shapetrail.", ButtonType.CANCEL, ButtonType.OK);
-            a.setHeaderText("Delete visit");
+            Alert a = new Alert(Alert.AlertType.CONFIRMATION, tr("delete.ask", line.date()), ButtonType.CANCEL, ButtonType.OK);
+            a.setHeaderText(tr("delete.title"));
             a.initOwner(ctx.window());
             if (a.showAndWait().orElse(ButtonType.CANCEL) != ButtonType.OK) {
                 return;
@@ -176,17 +177,17 @@ final class PersonPageView {
                     return snap;
                 });
             } catch (RuntimeException e) {
-                ctx.vm.errorProperty().set("The visit was not deleted: " + Errors.describe(e));
+                ctx.vm.errorProperty().set(tr("delete.failed", Errors.describe(e)));
                 return;
             }
-            before.ifPresent(b -> pushUndo("the deletion of the visit of " + line.date(), () -> b.restoreDeleted(file)));
+            before.ifPresent(b -> pushUndo(tr("undo.delete", line.date()), () -> b.restoreDeleted(file)));
             ctx.vm.reload();
         });
     }
 
     private void pushUndo(String what, Runnable action) {
         undo.push(action);
-        pane.undo.setText("Undo " + what);
+        pane.undo.setText(tr("undo.what", what));
         pane.undo.setDisable(false);
     }
 
@@ -200,11 +201,11 @@ final class PersonPageView {
                 });
             } catch (RuntimeException e) {
                 undo.push(r); // still there to try again
-                ctx.vm.errorProperty().set("Nothing was undone: " + Errors.describe(e));
+                ctx.vm.errorProperty().set(tr("undo.failed", Errors.describe(e)));
             }
             ctx.vm.reload();
         }
-        pane.undo.setText("Undo last change");
+        pane.undo.setText(tr("person.undo"));
         pane.undo.setDisable(undo.isEmpty());
     }
 
@@ -214,9 +215,8 @@ final class PersonPageView {
             return;
         }
         Dialog<ButtonType> d = new Dialog<>();
-        d.setTitle("Move to squad");
-        d.setHeaderText(p.displayName() + " moves to another squad (the current membership ends the day before),"
-                + " or leaves: choose \"" + LEAVES.name() + "\" and the last day.");
+        d.setTitle(tr("move.title"));
+        d.setHeaderText(tr("move.header", p.displayName(), LEAVES.name()));
         d.initOwner(ctx.window());
         ComboBox<Squad> to = new ComboBox<>(FXCollections.observableArrayList(l.builder().academy().squads()));
         to.getItems().add(LEAVES);
@@ -237,10 +237,10 @@ final class PersonPageView {
         GridPane g = new GridPane();
         g.setHgap(8);
         g.setVgap(8);
-        g.addRow(0, new Label("Squad"), to);
-        Label fromLabel = new Label("From");
-        fromLabel.textProperty().bind(Bindings.when(to.valueProperty().isEqualTo(LEAVES)).then("Last day")
-                .otherwise("From"));
+        g.addRow(0, new Label(tr("move.squad")), to);
+        Label fromLabel = new Label(tr("move.from"));
+        fromLabel.textProperty().bind(Bindings.when(to.valueProperty().isEqualTo(LEAVES)).then(tr("move.lastDay"))
+                .otherwise(tr("move.from")));
         g.addRow(1, fromLabel, from);
         d.getDialogPane().setContent(g);
         d.getDialogPane().getButtonTypes().addAll(ButtonType.CANCEL, ButtonType.OK);
@@ -257,7 +257,7 @@ final class PersonPageView {
             return;
         }
         Loaded l = ctx.loaded();
-        ctx.vm.runner().run("Preparing the letter", () -> LetterPreview.pages(
+        ctx.vm.runner().run(tr("preview.preparing"), () -> LetterPreview.pages(
                 new LetterComposer(l.builder(), settings, ctx.locale).compose(h.get()), 80), pages -> {
                     javafx.scene.layout.VBox box = new javafx.scene.layout.VBox(10);
                     box.setId("letter-preview");
@@ -270,7 +270,7 @@ final class PersonPageView {
                     }
                     javafx.stage.Stage s = new javafx.stage.Stage();
                     s.initOwner(ctx.window());
-                    s.setTitle("Letter preview — " + h.get().person().displayName());
+                    s.setTitle(tr("preview.title", h.get().person().displayName()));
                     s.setScene(new javafx.scene.Scene(new javafx.scene.control.ScrollPane(box), 680, 820));
                     s.show();
                     lastPreview = s;

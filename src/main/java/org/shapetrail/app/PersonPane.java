@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.Locale;
 import java.util.function.Consumer;
 import javafx.beans.property.SimpleStringProperty;
@@ -17,7 +19,7 @@ import org.shapetrail.history.PersonHistory;
 
 /** The person page: profile with cautions, the verdict of the latest change, the visit table and the chart. */
 public final class PersonPane extends BorderPane {
-    private final Label title = new Label("Choose a person on the left");
+    private final Label title = new Label(tr("person.choose"));
     private final VBox profile = new VBox(3);
     private final Label latest = new Label();
     private final TableView<VisitLine> visits = new TableView<>();
@@ -27,17 +29,17 @@ public final class PersonPane extends BorderPane {
     private java.util.List<org.shapetrail.somatotype.Rating> spaceRatings = java.util.List.of();
     private final javafx.scene.control.TabPane views = new javafx.scene.control.TabPane();
     private final SplitPane split;
-    private final javafx.scene.control.CheckBox regions = new javafx.scene.control.CheckBox("Show the category regions");
+    private final javafx.scene.control.CheckBox regions = new javafx.scene.control.CheckBox(tr("person.regions"));
     private PersonHistory shown;
     private Locale shownLocale = Locale.getDefault();
-    final Button newVisit = new Button("New visit…");
-    final Button editVisit = new Button("Edit visit…");
-    final Button deleteVisit = new Button("Delete visit…");
-    final Button visitHistory = new Button("Visit history…");
-    final Button undo = new Button("Undo last change");
-    final Button previewLetter = new Button("Preview letter…");
-    final Button editPerson = new Button("Edit person…");
-    final Button moveSquad = new Button("Move to squad…");
+    final Button newVisit = new Button(tr("person.newVisit"));
+    final Button editVisit = new Button(tr("person.editVisit"));
+    final Button deleteVisit = new Button(tr("person.deleteVisit"));
+    final Button visitHistory = new Button(tr("person.visitHistory"));
+    final Button undo = new Button(tr("person.undo"));
+    final Button previewLetter = new Button(tr("person.previewLetter"));
+    final Button editPerson = new Button(tr("person.editPerson"));
+    final Button moveSquad = new Button(tr("person.moveSquad"));
 
     public PersonPane() {
         setId("person-page");
@@ -52,23 +54,22 @@ public final class PersonPane extends BorderPane {
         editVisit.setId("edit-visit");
         deleteVisit.setId("delete-visit");
         visitHistory.setId("visit-history");
-        visitHistory.setTooltip(new javafx.scene.control.Tooltip("Who entered and changed the chosen visit, when, and"
-                + " what changed (kept by a server)"));
+        visitHistory.setTooltip(new javafx.scene.control.Tooltip(tr("person.visitHistory.tip")));
         undo.setId("undo");
         previewLetter.setId("preview-letter");
         editPerson.setId("edit-person");
         moveSquad.setId("move-squad");
-        column("Date", VisitLine::date, 100);
-        column("Age", VisitLine::age, 50);
-        column("Measurer", VisitLine::measurer, 120);
-        column("Context", VisitLine::context, 110);
-        column("Stature cm", VisitLine::stature, 80);
-        column("Mass kg", VisitLine::mass, 70);
-        column("Somatotype", VisitLine::rating, 100);
-        column("Category", VisitLine::category, 150);
-        column("Moved (SAD)", VisitLine::change, 85);
-        column("Change ÷ noise limit", VisitLine::verdict, 170);
-        visits.setPlaceholder(new Label("No visits yet"));
+        column(tr("person.col.date"), VisitLine::date, 100);
+        column(tr("person.col.age"), VisitLine::age, 50);
+        column(tr("person.col.measurer"), VisitLine::measurer, 120);
+        column(tr("person.col.context"), VisitLine::context, 110);
+        column(tr("person.col.stature"), VisitLine::stature, 80);
+        column(tr("person.col.mass"), VisitLine::mass, 70);
+        column(tr("person.col.somatotype"), VisitLine::rating, 100);
+        column(tr("person.col.category"), VisitLine::category, 150);
+        column(tr("person.col.moved"), VisitLine::change, 85);
+        column(tr("person.col.multiple"), VisitLine::verdict, 170);
+        visits.setPlaceholder(new Label(tr("person.noVisits")));
         editVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
         deleteVisit.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
         visitHistory.disableProperty().bind(visits.getSelectionModel().selectedItemProperty().isNull());
@@ -84,8 +85,7 @@ public final class PersonPane extends BorderPane {
         VBox head = new VBox(6, title, profile, latest, actions);
         head.setPadding(new Insets(10, 12, 8, 12));
         setTop(head);
-        Label key = new Label("━━ change beyond noise    ╺ ╸╺ borderline    ┈┈┈ within noise    ◯ shaded: 95 %"
-                + " measurement-noise region (first and latest visit)    ● latest visit");
+        Label key = new Label(tr("person.chart.key"));
         key.setId("chart-key");
         key.setWrapText(true);
         key.getStyleClass().add("hint");
@@ -98,9 +98,9 @@ public final class PersonPane extends BorderPane {
         BorderPane chartBox = new BorderPane(chart);
         chartBox.setBottom(new VBox(2, key, regions));
         growth.setId("growth-chart");
-        javafx.scene.control.Tab somato = new javafx.scene.control.Tab("Somatochart", chartBox);
-        javafx.scene.control.Tab growthTab = new javafx.scene.control.Tab("Growth", growth);
-        javafx.scene.control.Tab spaceTab = new javafx.scene.control.Tab("3D");
+        javafx.scene.control.Tab somato = new javafx.scene.control.Tab(tr("person.tab.somatochart"), chartBox);
+        javafx.scene.control.Tab growthTab = new javafx.scene.control.Tab(tr("person.tab.growth"), growth);
+        javafx.scene.control.Tab spaceTab = new javafx.scene.control.Tab(tr("person.tab.space"));
         // the 3D scene is built when first shown: most sessions never open it, and it costs start-up time
         spaceTab.selectedProperty().addListener((o, a, b) -> {
             if (b && space == null) {
@@ -115,7 +115,7 @@ public final class PersonPane extends BorderPane {
         split = new SplitPane(visits, views);
         split.setDividerPositions(0.5);
         // the table and charts join the scene with the first person shown: a lighter first frame
-        Label choose = new Label("Choose a person in the list to see their visits, verdicts and charts.");
+        Label choose = new Label(tr("person.choose.long"));
         choose.getStyleClass().add("hint");
         choose.setPadding(new Insets(20));
         setCenter(choose);
@@ -148,7 +148,7 @@ public final class PersonPane extends BorderPane {
         for (String line : page.profile()) {
             Label l = new Label(line);
             l.setWrapText(true);
-            l.getStyleClass().add(line.contains("RAPID GROWTH") ? "alert-line" : "profile-line");
+            l.getStyleClass().add(line.endsWith(PersonPage.rapidMark()) ? "alert-line" : "profile-line");
             profile.getChildren().add(l);
         }
         latest.setText(page.latestChange());

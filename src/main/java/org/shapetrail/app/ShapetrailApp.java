@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.shapetrail.store.RecordSource;
@@ -18,6 +20,8 @@ import org.shapetrail.store.DataFolder;
 /** The JavaFX application: builds the workbench window, remembers its size and the last file. */
 public final class ShapetrailApp extends Application {
     /** The window's settings (size, the last record opened, the last server): never a measurement or a password. */
+    /** The product's name, the same in every language. */
+    static final String NAME = "Shapetrail"; // not words: a name
     static final Preferences PREFS = Preferences.userRoot().node("org/shapetrail/app");
     /** The start file read while the toolkit starts (see {@link #preload}), or null. */
     private static volatile java.util.concurrent.CompletableFuture<Loaded> preloaded;
@@ -54,7 +58,7 @@ public final class ShapetrailApp extends Application {
     @Override
     public void start(Stage stage) {
         if (Boolean.getBoolean("shapetrail.startupProbe")) {
-            System.out.println("toolkit started after " + java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime() + " ms");
+            probe("toolkit-started");
         }
         RecordSource start = chooseStart(getParameters() == null ? List.of() : getParameters().getRaw());
         show(stage, start, new FxTaskRunner(), Locale.getDefault(Locale.Category.FORMAT), true);
@@ -62,8 +66,8 @@ public final class ShapetrailApp extends Application {
 
     static void probe(String what) {
         if (Boolean.getBoolean("shapetrail.startupProbe")) {
-            System.out.println(what + " after " + java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime()
-                    + " ms");
+            System.out.println(what + " after " // not words: read by bench/cold-start.sh
+                    + java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime() + " ms"); // not words
         }
     }
 
@@ -138,7 +142,7 @@ public final class ShapetrailApp extends Application {
         stage.setUserData(vm);
         stage.addEventHandler(javafx.stage.WindowEvent.WINDOW_HIDDEN, e -> vm.letGo());
         Workbench workbench = new Workbench(vm, locale);
-        probe("workbench built");
+        probe("workbench-built");
         double width = defaultWidth();
         double height = defaultHeight();
         Scene scene = new Scene(workbench.root(), remember ? PREFS.getDouble("width", width) : width,
@@ -154,7 +158,7 @@ public final class ShapetrailApp extends Application {
                 () -> workbench.pages().getSelectionModel().select(1));
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.DIGIT3, KeyCombination.SHORTCUT_DOWN),
                 () -> workbench.pages().getSelectionModel().select(2));
-        stage.setTitle("Shapetrail");
+        stage.setTitle(NAME);
         stage.setScene(scene);
         if (remember) {
             stage.setOnCloseRequest(e -> {
@@ -168,25 +172,25 @@ public final class ShapetrailApp extends Application {
                 }
             });
         }
-        probe("scene ready");
+        probe("scene-ready");
         stage.show();
-        probe("stage shown");
+        probe("stage-shown");
         if (Boolean.getBoolean("shapetrail.startupProbe")) {
             // for bench/cold-start.sh: report when the people list is on screen, then quit
             vm.loadedProperty().addListener((o, a, b) -> javafx.application.Platform.runLater(() -> {
                 long now = System.currentTimeMillis();
                 long ms = now - java.lang.management.ManagementFactory.getRuntimeMXBean().getStartTime();
-                System.out.println("usable window with " + vm.rows().size() + " people after " + ms
-                        + " ms from JVM start, at " + now + " ms since 1970");
+                System.out.println("usable window with " + vm.rows().size() + " people after " + ms // not words
+                        + " ms from JVM start, at " + now + " ms since 1970"); // not words: read by bench/cold-start.sh
                 javafx.application.Platform.exit();
             }));
         }
         var pre = preloaded;
         if (pre != null && file.equals(preloadedFile)) {
             preloaded = null;
-            vm.statusProperty().set("Opening " + file.title() + " …");
+            vm.statusProperty().set(tr("window.opening.named", file.title()));
             pre.whenComplete((l, t) -> javafx.application.Platform.runLater(() -> {
-                probe("preload done");
+                probe("preload-done");
                 if (l != null) {
                     vm.show(l);
                 } else {

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -51,12 +53,12 @@ public final class VisitEntryView {
         this.vm = vm;
         stage.initOwner(owner);
         stage.initModality(Modality.WINDOW_MODAL);
-        stage.setTitle((vm.isEdit() ? "Edit visit — " : "New visit — ") + vm.heading());
-        Label who = new Label((vm.isEdit() ? "Editing a visit of " : "New visit for ") + vm.heading());
+        stage.setTitle(tr(vm.isEdit() ? "entry.title.edit" : "entry.title.new", vm.heading()));
+        Label who = new Label(tr(vm.isEdit() ? "entry.who.edit" : "entry.who.new", vm.heading()));
         who.setId("visit-person");
         who.getStyleClass().add("page-title");
-        vm.dateProperty().addListener((o, a, b) -> who.setText((vm.isEdit() ? "Editing a visit of "
-                : "New visit for ") + vm.heading()));
+        vm.dateProperty().addListener((o, a, b) -> who.setText(tr(vm.isEdit() ? "entry.who.edit"
+                : "entry.who.new", vm.heading())));
 
         DatePicker date = DatePickers.of(null, vm.locale());
         date.setId("visit-date");
@@ -77,14 +79,15 @@ public final class VisitEntryView {
         });
         TextField context = new TextField();
         context.setId("visit-context");
-        context.setPromptText("e.g. pre-season");
+        context.setPromptText(tr("entry.context.prompt"));
         context.textProperty().bindBidirectional(vm.contextProperty());
-        HBox head = new HBox(8, new Label("Date"), date, new Label("Measured by"), measurer, new Label("Context"),
+        HBox head = new HBox(8, new Label(tr("entry.date")), date, new Label(tr("entry.measuredBy")), measurer,
+                new Label(tr("entry.context")),
                 context);
         head.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
         javafx.scene.control.CheckBox confirm = new javafx.scene.control.CheckBox();
         confirm.setId("confirm-date");
-        confirm.textProperty().bind(vm.dateQuestionProperty().concat("  Yes, the date and the person are right."));
+        confirm.textProperty().bind(vm.dateQuestionProperty().concat(tr("entry.confirm")));
         confirm.selectedProperty().bindBidirectional(vm.dateConfirmedProperty());
         confirm.visibleProperty().bind(vm.dateQuestionProperty().isNotEmpty());
         confirm.managedProperty().bind(confirm.visibleProperty());
@@ -99,10 +102,11 @@ public final class VisitEntryView {
         grid.setVgap(4);
         grid.getColumnConstraints().addAll(new ColumnConstraints(250), new ColumnConstraints(80),
                 new ColumnConstraints(80), new ColumnConstraints(80), new ColumnConstraints(360));
-        grid.addRow(0, header("Site"), header("Trial 1"), header("Trial 2"), header("Trial 3"), header(""));
+        grid.addRow(0, header(tr("entry.site")), header(tr("entry.trial", 1)), header(tr("entry.trial", 2)),
+                header(tr("entry.trial", 3)), header(""));
         int row = 1;
         for (VisitEntryViewModel.SiteFields f : vm.fields()) {
-            Label name = new Label(f.site().label() + " (" + f.site().unit().symbol() + ")");
+            Label name = new Label(f.site().shown() + " (" + f.site().unit().symbol() + ")");
             TextField t1 = trialField(f.site().code() + "-1", f.first());
             TextField t2 = trialField(f.site().code() + "-2", f.second());
             TextField t3 = trialField(f.site().code() + "-3", f.third());
@@ -128,7 +132,7 @@ public final class VisitEntryView {
         TextField ecto = small("rater-ecto", vm.raterEctoProperty());
         TextField rater = new TextField();
         rater.setId("rater-name");
-        rater.setPromptText("rater");
+        rater.setPromptText(tr("entry.raterPrompt"));
         rater.textProperty().bindBidirectional(vm.raterNameProperty());
         ComboBox<RatingMethod> method = new ComboBox<>();
         method.getItems().setAll(RatingMethod.values());
@@ -147,7 +151,7 @@ public final class VisitEntryView {
         Label raterCmp = new Label();
         raterCmp.setId("rater-comparison");
         raterCmp.textProperty().bind(vm.raterComparisonProperty());
-        HBox raterBox = new HBox(6, new Label("Rater's rating (optional)"), endo, meso, ecto, rater, method, raterCmp);
+        HBox raterBox = new HBox(6, new Label(tr("entry.rater")), endo, meso, ecto, rater, method, raterCmp);
 
         Label live = new Label();
         live.setId("live-rating");
@@ -162,15 +166,15 @@ public final class VisitEntryView {
         problems.setPrefHeight(90);
         problems.setFocusTraversable(false);
 
-        Button save = new Button("Save visit");
+        Button save = new Button(tr("entry.save"));
         save.setId("save-visit");
         save.setDefaultButton(false);
         save.disableProperty().bind(vm.canSaveProperty().not());
         save.setOnAction(e -> save());
-        Button cancel = new Button("Close without saving");
+        Button cancel = new Button(tr("entry.close"));
         cancel.setOnAction(e -> stage.close());
         // after a save refused because someone else saved this visit meanwhile: close and show theirs
-        Button reload = new Button("Close and reload the visits");
+        Button reload = new Button(tr("entry.reload"));
         reload.setId("reload-after-conflict");
         reload.visibleProperty().bind(vm.reloadOfferedProperty());
         reload.managedProperty().bind(vm.reloadOfferedProperty());
@@ -180,12 +184,12 @@ public final class VisitEntryView {
                 onReload.run();
             }
         });
-        Label hint = new Label("Enter moves to the next trial · Ctrl+S saves · Esc closes");
+        Label hint = new Label(tr("entry.hint"));
         hint.getStyleClass().add("hint");
         HBox buttons = new HBox(8, save, cancel, reload, hint);
 
         context.setOnAction(e -> order.get(0).requestFocus());
-        VBox body = new VBox(10, who, head, confirm, grid, raterBox, live, verdict, new Label("To put right before saving:"),
+        VBox body = new VBox(10, who, head, confirm, grid, raterBox, live, verdict, new Label(tr("entry.toPutRight")),
                 problems, buttons);
         body.setPadding(new Insets(12));
         ScrollPane scroll = new ScrollPane(body);

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import org.shapetrail.store.RecordSource;
 import java.time.LocalDate;
 import java.time.LocalDateTime;
@@ -209,16 +211,16 @@ public final class VisitEntryViewModel {
                     values.add(p.value());
                 } else {
                     ok = false;
-                    found.add(new Problem(f.site, p.problem().kind(), "Trial " + (i + 1) + ": " + p.problem().message()));
+                    found.add(new Problem(f.site, p.problem().kind(), tr("check.trial", i + 1) + p.problem().message()));
                 }
             }
             if (ok && texts.get(1).isEmpty()) {
                 for (int i = 0; i < values.size(); i++) {
                     int trial = i + 1;
                     org.shapetrail.measure.MeasurementCheck.check(f.site, values.get(i)).ifPresent(p -> found.add(
-                            new Problem(f.site, p.kind(), "Trial " + trial + ": " + p.message())));
+                            new Problem(f.site, p.kind(), tr("check.trial", trial) + p.message())));
                 }
-                found.add(new Problem(f.site, ProblemKind.MISSING, f.site.label() + " needs a second trial."));
+                found.add(new Problem(f.site, ProblemKind.MISSING, tr("entry.secondTrial", f.site.shown())));
                 ok = false;
             }
             if (ok) {
@@ -234,21 +236,20 @@ public final class VisitEntryViewModel {
             f.message.set(msg);
         }
         if (trials.isEmpty() && found.isEmpty()) {
-            found.add(new Problem(null, ProblemKind.MISSING, "Enter at least one site."));
+            found.add(new Problem(null, ProblemKind.MISSING, tr("entry.oneSite")));
         }
         if (measurer.get() == null) {
             found.add(new Problem(null, ProblemKind.MISSING, measurers.isEmpty()
-                    ? "This file has no measurers yet: add one on the Measurers page (Add measurer…), then enter the visit."
-                    : "Choose who measured."));
+                    ? tr("entry.noMeasurers") : tr("entry.chooseMeasurer")));
         }
         if (date.get() == null) {
-            found.add(new Problem(null, ProblemKind.MISSING, "Enter the date of the visit."));
+            found.add(new Problem(null, ProblemKind.MISSING, tr("entry.enterDate")));
         } else {
             org.shapetrail.measure.VisitDate.check(person.birthDate(), date.get(), LocalDate.now()).ifPresent(found::add);
         }
         dateQuestion.set(dateQuestionNow());
         if (!dateQuestion.get().isEmpty() && !dateConfirmed.get()) {
-            found.add(new Problem(null, ProblemKind.INCONSISTENT, "Confirm the date: " + dateQuestion.get()));
+            found.add(new Problem(null, ProblemKind.INCONSISTENT, tr("entry.confirmDate", dateQuestion.get())));
         }
         org.shapetrail.store.TextRules.problem(org.shapetrail.store.TextRules.Field.CONTEXT, context.get())
                 .ifPresent(w -> found.add(new Problem(null, ProblemKind.UNUSABLE_TEXT,
@@ -265,7 +266,7 @@ public final class VisitEntryViewModel {
             return null;
         }
         double[] v = new double[3];
-        String[] names = {"endomorphy", "mesomorphy", "ectomorphy"};
+        String[] names = {tr("entry.rater.endomorphy"), tr("entry.rater.mesomorphy"), tr("entry.rater.ectomorphy")};
         for (int i = 0; i < 3; i++) {
             try {
                 v[i] = Double.parseDouble(t.get(i).replace(DecimalStyle.of(locale).separator(), '.'));
@@ -273,13 +274,12 @@ public final class VisitEntryViewModel {
                     throw new NumberFormatException();
                 }
             } catch (NumberFormatException e) {
-                found.add(new Problem(null, ProblemKind.NOT_A_NUMBER, "Rater's " + names[i] + " \"" + t.get(i)
-                        + "\" must be a rating from 0.5 to 12, e.g. 3.5."));
+                found.add(new Problem(null, ProblemKind.NOT_A_NUMBER, tr("entry.rater.bad", names[i], t.get(i))));
                 return null;
             }
         }
         if (raterName.get().isBlank()) {
-            found.add(new Problem(null, ProblemKind.MISSING, "Enter the rater's name with the rating."));
+            found.add(new Problem(null, ProblemKind.MISSING, tr("entry.rater.name")));
         }
         return Rating.of(v[0], v[1], v[2]);
     }
@@ -290,15 +290,14 @@ public final class VisitEntryViewModel {
         raterComparison.set("");
         if (!o.rated()) {
             long missing = o.problems().stream().filter(p -> p.kind() == ProblemKind.MISSING).count();
-            liveRating.set(found.isEmpty() && missing > 0 ? "Somatotype: not yet (needs " + missing + " more site"
-                    + (missing == 1 ? "" : "s") + ")" : "Somatotype: not yet");
+            liveRating.set(found.isEmpty() && missing > 0 ? tr("entry.notYet.sites", missing) : tr("entry.notYet"));
             return;
         }
         Rating r = o.somatotype().rating();
-        liveRating.set("Somatotype " + r.toDisplayString() + " — " + o.somatotype().category().displayName());
+        liveRating.set(tr("entry.live", r.toDisplayString(locale), o.somatotype().category().shown()));
         if (rater != null) {
-            raterComparison.set("Rater's " + rater.toDisplayString() + " lies at SAD "
-                    + Numbers.fmt(locale, Distances.sad(r, rater), 2) + " from the anthropometric rating.");
+            raterComparison.set(tr("entry.raterSad", rater.toDisplayString(locale),
+                    Numbers.fmt(locale, Distances.sad(r, rater), 2)));
         }
         if (measurer.get() == null || date.get() == null
                 || found.stream().anyMatch(p -> p.kind() == ProblemKind.IMPOSSIBLE_DATE)) {
@@ -310,10 +309,9 @@ public final class VisitEntryViewModel {
                 .filter(v -> v.visit().measuredAt().toLocalDate().isBefore(date.get()))
                 .filter(v -> editing == null || v.visit().id() != editing.id())
                 .reduce((a, b) -> b)
-                .ifPresent(prev -> liveVerdict.set("Against the visit of " + prev.visit().measuredAt().toLocalDate()
+                .ifPresent(prev -> liveVerdict.set(tr("entry.against", prev.visit().measuredAt().toLocalDate()
                         .format(java.time.format.DateTimeFormatter.ofLocalizedDate(java.time.format.FormatStyle.MEDIUM)
-                                .withLocale(locale)) + ": "
-                        + PersonPage.words(builder.verdict(prev, now), locale)));
+                                .withLocale(locale)), PersonPage.words(builder.verdict(prev, now), locale))));
     }
 
     private Visit draft(List<SiteTrials> trials) {
@@ -409,11 +407,10 @@ public final class VisitEntryViewModel {
         }
         long days = java.time.temporal.ChronoUnit.DAYS.between(before.get(), d);
         if (days == 0) {
-            return person.displayName() + " already has a visit today. Is this another one?";
+            return tr("entry.sameDay", person.displayName());
         }
         if (days < CONFIRM_WITHIN_DAYS) {
-            return person.displayName() + " was last measured " + days + " day" + (days == 1 ? "" : "s") + " ago ("
-                    + before.get() + "). Is this visit really theirs, today?";
+            return tr("entry.recent", person.displayName(), days, before.get());
         }
         return "";
     }
@@ -430,10 +427,10 @@ public final class VisitEntryViewModel {
     /** Who this visit is for, e.g. "Freya Breakwater · 22.5 years · Senior squad". */
     public String heading() {
         LocalDate d = date.get() == null ? LocalDate.now() : date.get();
-        String age = d.isBefore(person.birthDate()) ? "" : " · " + Numbers.fmt(locale,
-                org.shapetrail.growth.DecimalAge.years(person.birthDate(), d), 1) + " years";
+        String age = d.isBefore(person.birthDate()) ? "" : tr("entry.heading.age", Numbers.fmt(locale,
+                org.shapetrail.growth.DecimalAge.years(person.birthDate(), d), 1));
         String squad = WorkbenchViewModel.currentSquad(builder.academy(), person.id());
-        return person.displayName() + age + " · " + (squad.isEmpty() ? "no current squad" : squad);
+        return person.displayName() + age + " · " + (squad.isEmpty() ? tr("person.noSquad") : squad);
     }
 
     public BooleanProperty savingProperty() {

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.Locale;
 import javafx.geometry.Insets;
 import javafx.geometry.Pos;
@@ -30,15 +32,15 @@ public final class Workbench {
     private final PeopleListView people;
     private final PersonPageView person;
     private final TabPane pages = new TabPane();
-    private final Tab personTab = new Tab("Person");
-    private final Tab squadTab = new Tab("Squad");
-    private final Tab measurersTab = new Tab("Measurers");
-    private final Tab settingsTab = new Tab("Settings");
+    private final Tab personTab = new Tab(tr("window.tab.person"));
+    private final Tab squadTab = new Tab(tr("window.tab.squad"));
+    private final Tab measurersTab = new Tab(tr("window.tab.measurers"));
+    private final Tab settingsTab = new Tab(tr("window.tab.settings"));
     private SquadPageView squad;
     private BlocksPageView blocks;
     private TabPane squadViews;
     private MeasurersPageView measurers;
-    private final ToggleButton dark = new ToggleButton("Dark theme");
+    private final ToggleButton dark = new ToggleButton(tr("window.dark"));
 
     public Workbench(WorkbenchViewModel vm, Locale locale) {
         ctx = new WorkbenchContext(vm, locale, () -> root.getScene().getWindow());
@@ -58,7 +60,7 @@ public final class Workbench {
     }
 
     private Parent header() {
-        Label title = new Label("Shapetrail");
+        Label title = new Label(ShapetrailApp.NAME);
         title.setId("app-title");
         title.getStyleClass().add("app-title");
         Label file = new Label();
@@ -75,23 +77,22 @@ public final class Workbench {
             }
             fitToRole(b);
         });
-        Button open = new Button("Open file…");
+        Button open = new Button(tr("window.open"));
         open.setId("open-file");
         open.setOnAction(e -> chooseFile());
-        Button connect = new Button("Connect to a server…");
+        Button connect = new Button(tr("window.connect"));
         connect.setId("connect-server");
         connect.setOnAction(e -> connectToServer(null, null));
         ctx.vm.passwordWantedProperty().addListener((o, a, server) -> {
             if (server != null) {
                 javafx.application.Platform.runLater(() -> connectToServer(server.address().toString(),
-                        "The server at " + server.address().host() + " needs your password for "
-                                + server.address().user() + " (or the one given was refused)."));
+                        tr("window.password.wanted", server.address().host(), server.address().user())));
             }
         });
-        Button create = new Button("New file…");
+        Button create = new Button(tr("window.new"));
         create.setId("new-file");
         create.setOnAction(e -> chooseNewFile());
-        Button bring = new Button("Bring in a spreadsheet…");
+        Button bring = new Button(tr("window.import"));
         bring.setId("import-file");
         bring.setOnAction(e -> importFile());
         Region gap = new Region();
@@ -104,13 +105,13 @@ public final class Workbench {
                 root.getStyleClass().remove("dark");
             }
         });
-        javafx.scene.control.MenuItem sample = new javafx.scene.control.MenuItem("Open the sample academy");
+        javafx.scene.control.MenuItem sample = new javafx.scene.control.MenuItem(tr("window.sample"));
         sample.setId("open-sample");
         sample.setOnAction(e -> openSample());
-        javafx.scene.control.MenuItem about = new javafx.scene.control.MenuItem("About Shapetrail");
+        javafx.scene.control.MenuItem about = new javafx.scene.control.MenuItem(tr("window.about"));
         about.setId("about");
         about.setOnAction(e -> about());
-        javafx.scene.control.MenuButton help = new javafx.scene.control.MenuButton("Help", null, sample, about);
+        javafx.scene.control.MenuButton help = new javafx.scene.control.MenuButton(tr("window.help"), null, sample, about);
         help.setId("help-menu");
         HBox bar = new HBox(12, title, file, gap, bring, create, open, connect, help, dark);
         bar.setAlignment(Pos.CENTER_LEFT);
@@ -169,9 +170,9 @@ public final class Workbench {
     private Parent body() {
         personTab.setContent(person.pane());
         // pages other than the person page are built when first opened: a faster start
-        squadTab.setContent(new Label("Opening…"));
-        measurersTab.setContent(new Label("Opening…"));
-        settingsTab.setContent(new Label("Opening…"));
+        squadTab.setContent(new Label(tr("window.opening")));
+        measurersTab.setContent(new Label(tr("window.opening")));
+        settingsTab.setContent(new Label(tr("window.opening")));
         pages.getTabs().addAll(personTab, squadTab, measurersTab, settingsTab);
         pages.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         pages.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> fillCurrent());
@@ -188,8 +189,8 @@ public final class Workbench {
             if (squad == null) {
                 squad = new SquadPageView(ctx);
                 blocks = new BlocksPageView(ctx);
-                Tab blocksTab = new Tab("Training blocks", blocks.root());
-                squadViews = new TabPane(new Tab("Members", squad.root()), blocksTab);
+                Tab blocksTab = new Tab(tr("window.tab.blocks"), blocks.root());
+                squadViews = new TabPane(new Tab(tr("window.tab.members"), squad.root()), blocksTab);
                 squadViews.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
                 squadViews.setId("squad-views");
                 squadViews.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
@@ -220,7 +221,7 @@ public final class Workbench {
         bar.setId("progress");
         bar.progressProperty().bind(ctx.vm.runner().progressProperty());
         bar.visibleProperty().bind(ctx.vm.runner().busyProperty());
-        Button cancel = new Button("Cancel");
+        Button cancel = new Button(tr("window.cancel"));
         cancel.setId("cancel-work");
         cancel.visibleProperty().bind(ctx.vm.runner().busyProperty());
         cancel.setOnAction(e -> ctx.vm.runner().cancelCurrent());
@@ -235,7 +236,7 @@ public final class Workbench {
         HBox line = new HBox(10, status, bar, cancel, error);
         line.setAlignment(Pos.CENTER_LEFT);
         line.setPadding(new Insets(4, 14, 4, 14));
-        Label caution = new Label(Cautions.SHAPE_NOT_WORTH);
+        Label caution = new Label(Cautions.shapeNotWorth());
         caution.setId("caution");
         caution.getStyleClass().add("caution");
         caution.setWrapText(true);
@@ -265,8 +266,8 @@ public final class Workbench {
             return;
         }
         FileChooser fc = new FileChooser();
-        fc.setTitle("A spreadsheet saved as CSV");
-        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("CSV files", "*.csv", "*.txt"));
+        fc.setTitle(tr("window.csv.title"));
+        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter(tr("window.csv.files"), "*.csv", "*.txt"));
         var f = fc.showOpenDialog(ctx.window());
         if (f == null) {
             return;
@@ -275,15 +276,15 @@ public final class Workbench {
             new ImportWizardView(new ImportWizardViewModel(l.source(), f.toPath()), ctx.vm.runner(), ctx.window(),
                     ctx.vm::reload).show();
         } catch (java.io.IOException | RuntimeException e) {
-            ctx.vm.errorProperty().set("The file " + f.getName() + " cannot be read: " + Errors.describe(e));
+            ctx.vm.errorProperty().set(tr("window.file.unreadable", f.getName(), Errors.describe(e)));
         }
     }
 
     private void chooseNewFile() {
         FileChooser fc = new FileChooser();
-        fc.setTitle("A new, empty Shapetrail file");
+        fc.setTitle(tr("window.new.title"));
         fc.setInitialFileName("academy.shapetrail");
-        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Shapetrail files", "*.shapetrail", "*.sqlite"));
+        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter(tr("window.files"), "*.shapetrail", "*.sqlite"));
         var f = fc.showSaveDialog(ctx.window());
         if (f != null) {
             ctx.vm.createAndOpen(f.toPath());
@@ -305,17 +306,17 @@ public final class Workbench {
     private void about() {
         javafx.scene.control.Alert a = new javafx.scene.control.Alert(javafx.scene.control.Alert.AlertType.INFORMATION);
         a.initOwner(ctx.window());
-        a.setTitle("About Shapetrail");
+        a.setTitle(tr("window.about"));
         a.setHeaderText(org.shapetrail.store.AppVersion.named());
-        a.setContentText("Your files and settings are kept in " + org.shapetrail.store.DataFolder.userFolder()
-                + " unless you open a file elsewhere. " + Cautions.SHAPE_NOT_WORTH);
+        a.setContentText(tr("window.about.text", org.shapetrail.store.DataFolder.userFolder(),
+                Cautions.shapeNotWorth()));
         a.showAndWait();
     }
 
     private void chooseFile() {
         FileChooser fc = new FileChooser();
-        fc.setTitle("Open a Shapetrail file");
-        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Shapetrail files", "*.shapetrail", "*.sqlite", "*.db"));
+        fc.setTitle(tr("window.open.title"));
+        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter(tr("window.files"), "*.shapetrail", "*.sqlite", "*.db"));
         var f = fc.showOpenDialog(ctx.window());
         if (f != null) {
             ctx.vm.open(f.toPath());

@@ -84,8 +84,8 @@ final class GrowthCommand implements Callable<Integer> {
         t.write(out, output.format);
         if (output.format == OutputFormat.TEXT) {
             out.println();
-            out.println("Maturity: " + MaturityEstimate.CAUTION);
-            out.println("Rapid growth: " + org.shapetrail.growth.GrowthAlert.CAUTION);
+            out.println("Maturity: " + MaturityEstimate.caution());
+            out.println("Rapid growth: " + org.shapetrail.growth.GrowthAlert.caution());
         }
         return 0;
     }

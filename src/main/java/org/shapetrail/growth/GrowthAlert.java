@@ -7,8 +7,9 @@ package org.shapetrail.growth;
 public record GrowthAlert(double thresholdCmPerYear) {
     public static final double DEFAULT_CM_PER_YEAR = 7.0;
     /** Shown wherever the alert appears. */
-    public static final String CAUTION = "Rapid growth is a prompt to look, not a diagnosis: defer to the physio's"
-            + " clinical judgement on load and growth-related pain.";
+    public static String caution() {
+        return org.shapetrail.i18n.Messages.tr("growth.alert.caution");
+    }
 
     public GrowthAlert {
         if (!(thresholdCmPerYear > 0) || thresholdCmPerYear > 30) {

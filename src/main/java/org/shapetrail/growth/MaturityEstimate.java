@@ -15,9 +15,10 @@ import java.util.Objects;
  */
 public record MaturityEstimate(MaturityMethod method, double offsetYears, double ageAtPhv, double seeYears,
                                MaturityStatus status, MaturityTiming timing) {
-    /** The caution shown with every estimate. */
-    public static final String CAUTION = "Estimates carry about ±0.6 years of error and are pulled towards the"
-            + " average: early maturers tend to be estimated later, and late maturers earlier, than they are.";
+    /** The caution shown with every estimate, in the reader's language. */
+    public static String caution() {
+        return org.shapetrail.i18n.Messages.tr("maturity.caution");
+    }
 
     public MaturityEstimate {
         Objects.requireNonNull(method);
@@ -27,7 +28,8 @@ public record MaturityEstimate(MaturityMethod method, double offsetYears, double
 
     /** E.g. "circa-PHV, offset −0.4 y (± 0.59), age at PHV 13.9 (Mirwald et al. 2002)". */
     public String summary() {
-        return String.format(Locale.ROOT, "%s, offset %+.1f y (± %.2f), estimated age at PHV %.1f (%s)",
-                status.words(), offsetYears, seeYears, ageAtPhv, method.citation());
+        Locale l = org.shapetrail.i18n.Messages.current();
+        return org.shapetrail.i18n.Messages.tr("maturity.summary", status.words(), String.format(l, "%+.1f", offsetYears),
+                String.format(l, "%.2f", seeYears), String.format(l, "%.1f", ageAtPhv), method.citation());
     }
 }

@@ -66,15 +66,16 @@ public final class ObservedPhv {
                          int visits, PreeceBaines curve) {
         /** Plain words, e.g. "peak 8.1 cm/year at 13.6 years (± 0.2; fit error 0.3 cm, 11 visits)". */
         public String describe() {
+            Locale l = org.shapetrail.i18n.Messages.current();
             return switch (status) {
-                case FOUND -> String.format(Locale.ROOT,
-                        "peak %.1f cm/year at %.1f years (± %.1f; fit error %.1f cm, %d visits)", peakVelocity,
-                        ageAtPeak, seAgeAtPeak, rmseCm, visits);
-                case NOT_ENOUGH_VISITS -> "not enough visits (" + visits + "; at least " + MIN_VISITS
-                        + " over " + (int) MIN_SPAN_YEARS + " years are needed)";
-                case PEAK_OUTSIDE_VISITS -> "the growth spurt is not inside the visits yet";
-                case UNCERTAIN -> "the visits do not yet show a clear growth spurt";
-                case NO_FIT -> "no growth curve fits these visits";
+                case FOUND -> org.shapetrail.i18n.Messages.tr("phv.found", String.format(l, "%.1f", peakVelocity),
+                        String.format(l, "%.1f", ageAtPeak), String.format(l, "%.1f", seAgeAtPeak),
+                        String.format(l, "%.1f", rmseCm), visits);
+                case NOT_ENOUGH_VISITS -> org.shapetrail.i18n.Messages.tr("phv.fewVisits", visits, MIN_VISITS,
+                        (int) MIN_SPAN_YEARS);
+                case PEAK_OUTSIDE_VISITS -> org.shapetrail.i18n.Messages.tr("phv.outside");
+                case UNCERTAIN -> org.shapetrail.i18n.Messages.tr("phv.uncertain");
+                case NO_FIT -> org.shapetrail.i18n.Messages.tr("phv.noFit");
             };
         }
     }

@@ -36,6 +36,11 @@ public final class TargetHeight {
             this.words = words;
         }
 
+        /** The band in the reader's language. */
+        public String shown() {
+            return org.shapetrail.i18n.Messages.tr("band." + name());
+        }
+
         public String words() {
             return words;
         }

@@ -86,12 +86,10 @@ public record GrowthSummary(Velocity latestVelocity, Velocity alertVelocity, Mat
                 || Math.abs(seen.ageAtPeak() - maturity.ageAtPhv()) <= SPURT_DISAGREEMENT_YEARS) {
             return Optional.empty();
         }
-        return Optional.of(String.format(java.util.Locale.ROOT, "The spurt seen in the measurements (at %.1f years)"
-                + " and the estimate from body proportions (%.1f years) differ by %.1f years: the estimate comes from"
-                + " one visit, carries about ±0.6 years of error and is pulled towards the average age, so it is"
-                + " often late for early maturers and early for late ones; once the spurt is in the measurements, it"
-                + " is the better guide.", seen.ageAtPeak(), maturity.ageAtPhv(),
-                Math.abs(seen.ageAtPeak() - maturity.ageAtPhv())));
+        java.util.Locale l = org.shapetrail.i18n.Messages.current();
+        return Optional.of(org.shapetrail.i18n.Messages.tr("phv.disagree", String.format(l, "%.1f", seen.ageAtPeak()),
+                String.format(l, "%.1f", maturity.ageAtPhv()),
+                String.format(l, "%.1f", Math.abs(seen.ageAtPeak() - maturity.ageAtPhv()))));
     }
 
     public Optional<MaturityEstimate> maturityEstimate() {

@@ -19,7 +19,28 @@ public final class Messages {
     /** The languages Shapetrail is written in, English first. */
     public static final List<String> LANGUAGES = List.of("en", "es", "pt");
 
+    /**
+     * The language the window and the commands speak: the system's display language until the settings
+     * or {@code --lang} choose another. A letter's language is chosen per person and never read from here.
+     */
+    private static volatile Locale current = Locale.getDefault(Locale.Category.DISPLAY);
+
     private Messages() {
+    }
+
+    /** The locale the window and the commands speak now. */
+    public static Locale current() {
+        return current;
+    }
+
+    /** Makes the window and the commands speak a locale's language (formatting numbers in it too). */
+    public static void use(Locale locale) {
+        current = locale == null ? Locale.ROOT : locale;
+    }
+
+    /** The text of {@code key} in the current language (see {@link #use}), its arguments put in. */
+    public static String tr(String key, Object... args) {
+        return get(current, key, args);
     }
 
     /** The bundle of a locale's language (English for any other). */

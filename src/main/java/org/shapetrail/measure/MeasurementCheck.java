@@ -1,5 +1,7 @@
 package org.shapetrail.measure;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -29,16 +31,16 @@ public final class MeasurementCheck {
         if (Double.isFinite(value) && value > 0 && site.isPlausible(value)) {
             return Optional.empty(); // the common case, without building any message
         }
-        String name = site.label();
+        String name = site.shown();
         String entered = Numbers.asEntered(value);
         String unit = site.unit().symbol();
         if (!Double.isFinite(value)) {
             return Optional.of(new Problem(site, ProblemKind.NOT_A_NUMBER,
-                    name + " is not a number; enter the value in " + unit + "."));
+                    tr("check.notNumber", name, unit)));
         }
         if (value <= 0) {
             return Optional.of(new Problem(site, ProblemKind.NOT_POSITIVE,
-                    name + " " + entered + " must be greater than zero; enter the value in " + unit + "."));
+                    tr("check.notPositive", name, entered, unit)));
         }
         if (site.isPlausible(value)) {
             return Optional.empty();
@@ -48,43 +50,42 @@ public final class MeasurementCheck {
             return hint;
         }
         return Optional.of(new Problem(site, ProblemKind.OUT_OF_RANGE,
-                name + " " + entered + " " + unit + " is outside the plausible range "
-                        + Numbers.oneDecimal(site.minPlausible()) + "–" + Numbers.oneDecimal(site.maxPlausible())
-                        + " " + unit + "; check the value and the unit."));
+                tr("check.outOfRange", name, entered, unit, Numbers.oneDecimal(site.minPlausible()),
+                        Numbers.oneDecimal(site.maxPlausible()))));
     }
 
     private static Optional<Problem> unitHint(Site site, double value, String name, String entered) {
         switch (site.kind()) {
             case LENGTH -> {
                 if (site.isPlausible(value * 100)) {
-                    return suggestion(site, ProblemKind.LIKELY_METRES, name, entered, "metres", value * 100);
+                    return suggestion(site, ProblemKind.LIKELY_METRES, name, entered, "unit.metres", value * 100);
                 }
                 if (site.isPlausible(value * CM_PER_INCH)) {
-                    return suggestion(site, ProblemKind.LIKELY_INCHES, name, entered, "inches", value * CM_PER_INCH);
+                    return suggestion(site, ProblemKind.LIKELY_INCHES, name, entered, "unit.inches", value * CM_PER_INCH);
                 }
                 if (site.isPlausible(value / 10)) {
-                    return suggestion(site, ProblemKind.LIKELY_MILLIMETRES, name, entered, "millimetres",
+                    return suggestion(site, ProblemKind.LIKELY_MILLIMETRES, name, entered, "unit.millimetres",
                             value / 10);
                 }
             }
             case SKINFOLD -> {
                 if (site.isPlausible(value * 10)) {
-                    return suggestion(site, ProblemKind.LIKELY_CENTIMETRES, name, entered, "centimetres",
+                    return suggestion(site, ProblemKind.LIKELY_CENTIMETRES, name, entered, "unit.centimetres",
                             value * 10);
                 }
             }
             case GIRTH, BREADTH -> {
                 if (site.isPlausible(value / 10)) {
-                    return suggestion(site, ProblemKind.LIKELY_MILLIMETRES, name, entered, "millimetres",
+                    return suggestion(site, ProblemKind.LIKELY_MILLIMETRES, name, entered, "unit.millimetres",
                             value / 10);
                 }
             }
             case MASS -> {
                 if (value > site.maxPlausible() && site.isPlausible(value / LB_PER_KG)) {
-                    return suggestion(site, ProblemKind.LIKELY_POUNDS, name, entered, "pounds", value / LB_PER_KG);
+                    return suggestion(site, ProblemKind.LIKELY_POUNDS, name, entered, "unit.pounds", value / LB_PER_KG);
                 }
                 if (site.isPlausible(value / 1000)) {
-                    return suggestion(site, ProblemKind.LIKELY_GRAMS, name, entered, "grams", value / 1000);
+                    return suggestion(site, ProblemKind.LIKELY_GRAMS, name, entered, "unit.grams", value / 1000);
                 }
             }
         }
@@ -93,8 +94,8 @@ public final class MeasurementCheck {
 
     private static Optional<Problem> suggestion(Site site, ProblemKind kind, String name, String entered,
                                                 String wrongUnit, double corrected) {
-        return Optional.of(new Problem(site, kind, name + " " + entered + " looks like " + wrongUnit + "; enter "
-                + Numbers.oneDecimal(corrected) + " " + site.unit().symbol() + "."));
+        return Optional.of(new Problem(site, kind, tr("check.likelyUnit", name, entered, tr(wrongUnit),
+                Numbers.oneDecimal(corrected), site.unit().symbol())));
     }
 
     /**
@@ -125,21 +126,18 @@ public final class MeasurementCheck {
             double bmiIfPounds = (mass / LB_PER_KG) / (metres * metres);
             if (bmi > MAX_PLAUSIBLE_BMI && bmiIfPounds >= MIN_PLAUSIBLE_BMI) {
                 problems.add(new Problem(Site.BODY_MASS, ProblemKind.LIKELY_POUNDS,
-                        "Body mass " + Numbers.asEntered(mass) + " with stature " + Numbers.asEntered(stature)
-                                + " cm gives a BMI of " + Numbers.oneDecimal(bmi) + "; it looks like pounds; enter "
-                                + Numbers.oneDecimal(mass / LB_PER_KG) + " kg."));
+                        tr("check.bmi.pounds", Numbers.asEntered(mass), Numbers.asEntered(stature),
+                                Numbers.oneDecimal(bmi), Numbers.oneDecimal(mass / LB_PER_KG))));
             } else if (bmi < MIN_PLAUSIBLE_BMI) {
                 problems.add(new Problem(Site.BODY_MASS, ProblemKind.INCONSISTENT,
-                        "Body mass " + Numbers.asEntered(mass) + " kg with stature " + Numbers.asEntered(stature)
-                                + " cm gives a BMI of " + Numbers.oneDecimal(bmi)
-                                + ", which is not plausible; check both values."));
+                        tr("check.bmi.implausible", Numbers.asEntered(mass), Numbers.asEntered(stature),
+                                Numbers.oneDecimal(bmi))));
             }
         }
         Double sitting = usable(values, Site.SITTING_HEIGHT);
         if (stature != null && sitting != null && sitting >= stature) {
             problems.add(new Problem(Site.SITTING_HEIGHT, ProblemKind.INCONSISTENT,
-                    "Sitting height " + Numbers.asEntered(sitting) + " cm is not less than stature "
-                            + Numbers.asEntered(stature) + " cm; check both values."));
+                    tr("check.sitting", Numbers.asEntered(sitting), Numbers.asEntered(stature))));
         }
         return problems;
     }

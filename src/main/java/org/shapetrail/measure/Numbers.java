@@ -3,7 +3,10 @@ package org.shapetrail.measure;
 import java.math.BigDecimal;
 import java.util.Locale;
 
-/** Number formatting for messages: values as the person typed them, suggestions with one decimal. */
+/**
+ * Number formatting for messages: values as the person typed them, suggestions with one decimal, both with
+ * the decimal separator of the language the messages are in ({@link org.shapetrail.i18n.Messages#current}).
+ */
 public final class Numbers {
     private Numbers() {
     }
@@ -14,11 +17,16 @@ public final class Numbers {
             return String.valueOf(value);
         }
         String plain = BigDecimal.valueOf(value).stripTrailingZeros().toPlainString();
-        return plain.equals("-0") ? "0" : plain;
+        return (plain.equals("-0") ? "0" : plain).replace('.', separator());
     }
 
-    /** One decimal, decimal point, e.g. "178.0". */
+    /** One decimal, e.g. "178.0" (or "178,0" in Spanish and Portuguese). */
     public static String oneDecimal(double value) {
-        return String.format(Locale.ROOT, "%.1f", value);
+        return String.format(Locale.ROOT, "%.1f", value).replace('.', separator());
+    }
+
+    private static char separator() {
+        return java.text.DecimalFormatSymbols.getInstance(org.shapetrail.i18n.Messages.supported(
+                org.shapetrail.i18n.Messages.current())).getDecimalSeparator();
     }
 }

@@ -56,6 +56,14 @@ public enum Site {
         return label;
     }
 
+    /**
+     * The name in the reader's language (the trade's names in Spanish and Portuguese); {@link #label} stays
+     * the English one that files and the CSV formats use.
+     */
+    public String shown() {
+        return org.shapetrail.i18n.Messages.tr("site." + code);
+    }
+
     public SiteKind kind() {
         return kind;
     }

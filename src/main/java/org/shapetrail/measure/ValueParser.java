@@ -1,5 +1,7 @@
 package org.shapetrail.measure;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 /**
  * Parses a value typed or read from a file into a number in the site's unit. A text that is not a plain
  * decimal number in the expected style (digits, one separator, optional sign) is refused with a message;
@@ -23,25 +25,23 @@ public final class ValueParser {
         String t = text == null ? "" : text.strip();
         if (t.isEmpty()) {
             return new Parsed(Double.NaN, new Problem(site, ProblemKind.MISSING,
-                    site.label() + " is empty; enter the value in " + unit + "."));
+                    tr("check.empty", site.shown(), unit)));
         }
         char other = style == DecimalStyle.POINT ? ',' : '.';
         if (t.indexOf(other) >= 0 && t.indexOf(style.separator()) < 0 && isNumberWith(t, other)) {
             String fixed = t.replace(other, style.separator());
             return new Parsed(Double.NaN, new Problem(site, ProblemKind.NOT_A_NUMBER,
-                    site.label() + " \"" + t + "\" uses '" + other + "' as the decimal separator; enter "
-                            + fixed + " " + unit + "."));
+                    tr("check.separator", site.shown(), t, String.valueOf(other), fixed, unit)));
         }
-        String shown = t.length() > 24 ? t.substring(0, 20) + "… (" + t.length() + " characters)" : t;
+        String shown = t.length() > 24 ? tr("check.cut", t.substring(0, 20), t.length()) : t;
         if (!isNumberWith(t, style.separator())) {
             boolean exponent = t.length() < 40 && t.matches("[+-]?[0-9]+([.,][0-9]*)?[eE][+-]?[0-9]+");
-            return new Parsed(Double.NaN, new Problem(site, ProblemKind.NOT_A_NUMBER, site.label() + " \"" + shown
-                    + (exponent ? "\" is written with an exponent; enter a plain decimal in " + unit + "."
-                    : "\" is not a number; enter the value in " + unit + ".")));
+            return new Parsed(Double.NaN, new Problem(site, ProblemKind.NOT_A_NUMBER, tr(exponent
+                    ? "check.exponent" : "check.notNumber.text", site.shown(), shown, unit)));
         }
         if (t.replaceAll("[^0-9]", "").length() > 15) {
-            return new Parsed(Double.NaN, new Problem(site, ProblemKind.OUT_OF_RANGE, site.label() + " \"" + shown
-                    + "\" has more digits than any measurement; enter the value in " + unit + "."));
+            return new Parsed(Double.NaN, new Problem(site, ProblemKind.OUT_OF_RANGE, tr("check.digits",
+                    site.shown(), shown, unit)));
         }
         double v = Double.parseDouble(t.replace(style.separator(), '.'));
         return new Parsed(v, null);

@@ -1,5 +1,7 @@
 package org.shapetrail.measure;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.EnumMap;
@@ -21,7 +23,7 @@ public final class VisitCheck {
         for (SiteTrials t : trials) {
             if (bySite.put(t.site(), t) != null) {
                 problems.add(new Problem(t.site(), ProblemKind.TOO_MANY_TRIALS,
-                        t.site().label() + " appears twice in this visit; keep one set of trials."));
+                        tr("check.twice", t.site().shown())));
             }
         }
         Map<Site, Double> finals = new EnumMap<>(Site.class);
@@ -33,7 +35,7 @@ public final class VisitCheck {
                 if (p.isPresent()) {
                     allValid = false;
                     Problem raw = p.get();
-                    String prefix = t.values().size() > 1 ? "Trial " + (i + 1) + ": " : "";
+                    String prefix = t.values().size() > 1 ? tr("check.trial", i + 1) : "";
                     problems.add(new Problem(raw.site(), raw.kind(), prefix + raw.message()));
                 }
             }
@@ -44,11 +46,9 @@ public final class VisitCheck {
             outcomes.put(t.site(), outcome);
             if (outcome.status() == RepeatOutcome.Status.THIRD_TRIAL_NEEDED) {
                 problems.add(new Problem(t.site(), ProblemKind.THIRD_TRIAL_NEEDED,
-                        t.site().label() + " trials " + Numbers.asEntered(t.values().get(0)) + " and "
-                                + Numbers.asEntered(t.values().get(1)) + " differ by "
-                                + Numbers.oneDecimal(outcome.differencePercent()) + " % (more than "
-                                + Numbers.asEntered(t.site().kind().repeatTolerancePercent())
-                                + " %); take a third trial."));
+                        tr("check.third", t.site().shown(), Numbers.asEntered(t.values().get(0)),
+                                Numbers.asEntered(t.values().get(1)), Numbers.oneDecimal(outcome.differencePercent()),
+                                Numbers.asEntered(t.site().kind().repeatTolerancePercent()))));
             } else {
                 finals.put(t.site(), outcome.value().getAsDouble());
             }

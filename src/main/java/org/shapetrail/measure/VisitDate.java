@@ -20,12 +20,12 @@ public final class VisitDate {
      */
     public static Optional<Problem> check(LocalDate birth, LocalDate day, LocalDate today) {
         if (day.isAfter(today)) {
-            return Optional.of(new Problem(null, ProblemKind.IMPOSSIBLE_DATE, "The visit date " + day + " is in the future"
-                    + " (today is " + today + "); enter the day of the measurements."));
+            return Optional.of(new Problem(null, ProblemKind.IMPOSSIBLE_DATE, org.shapetrail.i18n.Messages.tr(
+                    "check.date.future", day, today)));
         }
         if (birth != null && day.isBefore(birth)) {
-            return Optional.of(new Problem(null, ProblemKind.IMPOSSIBLE_DATE, "The visit date " + day + " is before the"
-                    + " date of birth " + birth + "; check both dates."));
+            return Optional.of(new Problem(null, ProblemKind.IMPOSSIBLE_DATE, org.shapetrail.i18n.Messages.tr(
+                    "check.date.beforeBirth", day, birth)));
         }
         return Optional.empty();
     }

@@ -80,11 +80,11 @@ public record ErrorProfile(String measurer, Map<Site, SiteError> sites) {
             all &= d;
         }
         if (!any) {
-            return measurer + "'s own TEM";
+            return org.shapetrail.i18n.Messages.tr("basis.own", measurer);
         }
         if (all) {
-            return "default TEMs (" + measurer + " has too few repeats)";
+            return org.shapetrail.i18n.Messages.tr("basis.defaults", measurer);
         }
-        return measurer + "'s own TEM, with defaults where repeats are too few";
+        return org.shapetrail.i18n.Messages.tr("basis.mixed", measurer);
     }
 }

@@ -26,6 +26,11 @@ public final class TemTargets {
         public String words() {
             return words;
         }
+
+        /** The standing in the reader's language. */
+        public String shown() {
+            return org.shapetrail.i18n.Messages.tr("tem." + name());
+        }
     }
 
     /** Target for an accredited measurer, percent. */

@@ -33,6 +33,11 @@ public enum Verdict {
         return words;
     }
 
+    /** The verdict in the reader's language ({@link #words} stays English for the CSV formats). */
+    public String shown() {
+        return org.shapetrail.i18n.Messages.tr("verdict." + name());
+    }
+
     /** The verdict for a Mahalanobis distance² against χ²(3). */
     public static Verdict of(double d2) {
         return ofMultiple(multiple(d2));

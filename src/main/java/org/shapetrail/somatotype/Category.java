@@ -23,6 +23,11 @@ public enum Category {
     }
 
     /** Lower-case name, e.g. "ectomorphic mesomorph". */
+    /** The category in the reader's language ({@link #displayName} stays English for the CSV formats). */
+    public String shown() {
+        return org.shapetrail.i18n.Messages.tr("category." + name());
+    }
+
     public String displayName() {
         return displayName;
     }

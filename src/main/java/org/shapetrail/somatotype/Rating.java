@@ -54,4 +54,9 @@ public record Rating(double endomorphy, double mesomorphy, double ectomorphy) {
     public String toDisplayString() {
         return String.format(Locale.ROOT, "%.1f-%.1f-%.1f", endomorphy, mesomorphy, ectomorphy);
     }
+
+    /** One decimal per component in the reader's locale, e.g. "2,5-4,0-3,0" in Spanish. */
+    public String toDisplayString(Locale locale) {
+        return String.format(locale, "%.1f-%.1f-%.1f", endomorphy, mesomorphy, ectomorphy);
+    }
 }

@@ -47,7 +47,7 @@ public final class SomatotypeRater {
             boolean reported = problems.stream().anyMatch(p -> p.site() == s);
             if (!reported) {
                 problems.add(new Problem(s, ProblemKind.MISSING,
-                        s.label() + " is missing; the somatotype needs it (" + s.unit().symbol() + ")."));
+                        org.shapetrail.i18n.Messages.tr("check.missing", s.shown(), s.unit().symbol())));
             }
         }
         if (!problems.isEmpty()) {

@@ -30,6 +30,11 @@ public enum StaffRole {
     }
 
     /** The PostgreSQL group role. */
+    /** The role's name in the reader's language (the word typed stays {@link #word}). */
+    public String shown() {
+        return org.shapetrail.i18n.Messages.tr("role." + word);
+    }
+
     public String serverRole() {
         return serverRole;
     }

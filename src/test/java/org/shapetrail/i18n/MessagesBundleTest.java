@@ -61,6 +61,19 @@ class MessagesBundleTest {
     }
 
     @Test
+    void everyApostropheIsDoubledForMessageFormat() {
+        // MessageFormat reads a lone ' as the start of quoted text and drops it ("don't" prints as "dont");
+        // every pattern goes through MessageFormat, so a written apostrophe must be '' (Java's MessageFormat docs)
+        Pattern lone = Pattern.compile("(?<!')'(?!')");
+        for (String lang : Messages.LANGUAGES) {
+            ResourceBundle b = Messages.bundle(Locale.forLanguageTag(lang));
+            for (String key : b.keySet()) {
+                assertFalse(lone.matcher(b.getString(key)).find(), lang + " " + key + ": " + b.getString(key));
+            }
+        }
+    }
+
+    @Test
     void numbersAndPluralsFollowTheLanguage() {
         // the letter's month count uses MessageFormat's choice: 1 month, 5 months (common practice for plurals)
         String one = Messages.get(Locale.forLanguageTag("es"), "letter.height.gain", "150,0", "a", "151,0", "b", "1,0",
