@@ -34,8 +34,8 @@ public record BlockPage(String summary, List<String> athletes, List<AthleteLine>
             sb.append(r.block().name()).append(" (").append(r.block().startsOn()).append(" to ").append(r.block().endsOn())
                     .append("): ").append(g.n()).append(" athletes with both visits. ");
             sb.append(g.beyondNoise()).append(" of ").append(g.n()).append(" changed beyond measurement noise. ");
-            sb.append("Group mean ").append(g.before().meanRating().toDisplayString()).append(" → ")
-                    .append(g.after().meanRating().toDisplayString()).append(" (SAD ")
+            sb.append("Group mean ").append(g.before().meanRating().toDisplayString(locale)).append(" → ")
+                    .append(g.after().meanRating().toDisplayString(locale)).append(" (SAD ")
                     .append(Numbers.fmt(locale, g.sadBetweenMeans(), 2)).append("). ");
             if (g.hotelling() != null) {
                 sb.append("Three components together: Hotelling T² ").append(Numbers.fmt(locale, g.hotelling().t2(), 1))
@@ -57,16 +57,16 @@ public record BlockPage(String summary, List<String> athletes, List<AthleteLine>
                 java.time.format.FormatStyle.MEDIUM).withLocale(locale);
         SomatochartBuilder chart = new SomatochartBuilder(r.block().name(), locale).withoutLegend();
         for (BlockReview.Athlete a : r.athletes()) {
-            String words = a.person().displayName() + ": " + a.change().from().toDisplayString() + " → "
-                    + a.change().to().toDisplayString() + ", " + PersonPage.words(a.change(), locale);
+            String words = a.person().displayName() + ": " + a.change().from().toDisplayString(locale) + " → "
+                    + a.change().to().toDisplayString(locale) + ", " + PersonPage.words(a.change(), locale);
             athletes.add(words);
             rows.add(new AthleteLine(a.person().displayName(), a.before().visit().measuredAt().toLocalDate().format(dates)
-                    + "  " + a.change().from().toDisplayString(), a.after().visit().measuredAt().toLocalDate()
-                    .format(dates) + "  " + a.change().to().toDisplayString(), PersonPage.cell(a.change(), locale),
+                    + "  " + a.change().from().toDisplayString(locale), a.after().visit().measuredAt().toLocalDate()
+                    .format(dates) + "  " + a.change().to().toDisplayString(locale), PersonPage.cell(a.change(), locale),
                     Numbers.fmt(locale, a.change().sad(), 2), words));
             String colour = a.change().verdict() == Verdict.BEYOND_NOISE ? Palette.series(0) : Palette.MUTED;
             chart.arrow(a.change().from(), a.change().to(), a.change().verdict(), colour);
-            chart.point(a.change().to(), null, a.person().displayName() + "\n" + a.change().to().toDisplayString() + "\n"
+            chart.point(a.change().to(), null, a.person().displayName() + "\n" + a.change().to().toDisplayString(locale) + "\n"
                     + a.change().verdict().words(), colour, MarkerShape.CIRCLE);
         }
         List<String> left = r.missing().stream().map(m -> m.person().displayName() + ": " + m.reason()).toList();

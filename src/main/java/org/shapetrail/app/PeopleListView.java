@@ -57,13 +57,13 @@ final class PeopleListView {
         PeopleTable people = new PeopleTable("people", ctx.locale, false, vm.rows());
         table = people.table();
         table.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
-            if (b != null) {
+            if (b != null && ctx.live()) {
                 vm.selectedProperty().set(b);
             }
         });
         // the selection survives a reload (after a save the rows are new objects for the same people)
         vm.selectedProperty().addListener((o, a, b) -> {
-            if (b != null && table.getSelectionModel().getSelectedItem() != b) {
+            if (b != null && ctx.live() && table.getSelectionModel().getSelectedItem() != b) {
                 table.getSelectionModel().select(b);
             }
         });
@@ -113,6 +113,10 @@ final class PeopleListView {
         count.setId("people-count");
         vm.rows().addListener((ListChangeListener<PersonRow>) c -> count.setText(
                 tr("people.count", vm.rows().size())));
+        count.setText(vm.rows().isEmpty() ? "" : tr("people.count", vm.rows().size()));
+        if (vm.selectedProperty().get() != null) {
+            table.getSelectionModel().select(vm.selectedProperty().get());
+        }
         HBox filters = new HBox(6, squad, age, maturity);
         HBox periodLine = new HBox(6, new Label(tr("people.changeOver")), period, from, to);
         periodLine.setAlignment(javafx.geometry.Pos.CENTER_LEFT);

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.Optional;
 import javafx.geometry.Insets;
 import javafx.scene.control.ButtonType;
@@ -25,13 +27,24 @@ final class PersonFormView {
     static Optional<Person> show(PersonFormViewModel vm, Window owner) {
         Dialog<ButtonType> d = new Dialog<>();
         d.initOwner(owner);
-        d.setTitle(vm.isEdit() ? "Edit person" : "New person");
+        d.setTitle(tr(vm.isEdit() ? "form.title.edit" : "form.title.new"));
         TextField name = new TextField();
         name.setId("person-name");
         name.textProperty().bindBidirectional(vm.name);
         ComboBox<Sex> sex = new ComboBox<>();
         sex.getItems().setAll(Sex.values());
         sex.valueProperty().bindBidirectional(vm.sex);
+        sex.setConverter(new javafx.util.StringConverter<>() {
+            @Override
+            public String toString(Sex s) {
+                return s == null ? "" : tr(s == Sex.FEMALE ? "person.female" : "person.male");
+            }
+
+            @Override
+            public Sex fromString(String s) {
+                return null;
+            }
+        });
         DatePicker birth = DatePickers.of(null, vm.locale());
         birth.valueProperty().bindBidirectional(vm.birth);
         TextField father = new TextField();
@@ -40,18 +53,18 @@ final class PersonFormView {
         mother.textProperty().bindBidirectional(vm.mother);
         TextField predicted = new TextField();
         predicted.textProperty().bindBidirectional(vm.predicted);
-        CheckBox cm = new CheckBox("Consent to be measured");
+        CheckBox cm = new CheckBox(tr("form.consent.measure"));
         cm.selectedProperty().bindBidirectional(vm.consentMeasurement);
-        CheckBox cp = new CheckBox("Consent to photographs (off unless recorded)");
+        CheckBox cp = new CheckBox(tr("form.consent.photos"));
         cp.selectedProperty().bindBidirectional(vm.consentPhotographs);
-        CheckBox cs = new CheckBox("Consent to share results with a parent");
+        CheckBox cs = new CheckBox(tr("form.consent.share"));
         cs.selectedProperty().bindBidirectional(vm.consentSharing);
         ComboBox<Squad> squad = new ComboBox<>(vm.squads);
         squad.valueProperty().bindBidirectional(vm.squad);
         squad.setConverter(new StringConverter<>() {
             @Override
             public String toString(Squad s) {
-                return s == null ? "no squad" : s.name();
+                return s == null ? tr("form.noSquad") : s.name();
             }
 
             @Override
@@ -66,19 +79,20 @@ final class PersonFormView {
         g.setVgap(6);
         g.setPadding(new Insets(10));
         int r = 0;
-        g.addRow(r++, new Label("Name"), name);
-        g.addRow(r++, new Label("Sex"), sex);
-        g.addRow(r++, new Label("Date of birth"), birth);
-        g.addRow(r++, new Label("Father's stature (cm, optional)"), father);
-        g.addRow(r++, new Label("Mother's stature (cm, optional)"), mother);
-        g.addRow(r++, new Label("Predicted adult stature (cm, optional)"), predicted);
+        g.addRow(r++, new Label(tr("form.name")), name);
+        g.addRow(r++, new Label(tr("form.sex")), sex);
+        g.addRow(r++, new Label(tr("form.birth")), birth);
+        g.addRow(r++, new Label(tr("form.father")), father);
+        g.addRow(r++, new Label(tr("form.mother")), mother);
+        g.addRow(r++, new Label(tr("form.predicted")), predicted);
         javafx.scene.control.ComboBox<String> language = new javafx.scene.control.ComboBox<>(
                 javafx.collections.FXCollections.observableArrayList(org.shapetrail.store.Person.LETTER_LANGUAGES));
         language.setId("letter-language");
         language.setConverter(new javafx.util.StringConverter<>() {
             @Override
             public String toString(String code) {
-                return code == null || code.isEmpty() ? "as the academy writes (English)"
+                return code == null || code.isEmpty() ? tr("form.letters.default", Languages.nameOf(
+                        org.shapetrail.i18n.Messages.languageOf(org.shapetrail.i18n.Messages.current())))
                         : org.shapetrail.i18n.Messages.get(java.util.Locale.forLanguageTag(code), "letter.language");
             }
 
@@ -88,14 +102,14 @@ final class PersonFormView {
             }
         });
         language.valueProperty().bindBidirectional(vm.letterLanguage);
-        g.addRow(r++, new Label("Letters in"), language);
+        g.addRow(r++, new Label(tr("form.letters")), language);
         if (!vm.isEdit()) {
-            g.addRow(r++, new Label("Joins squad (from today)"), squad);
+            g.addRow(r++, new Label(tr("form.joins")), squad);
         }
         g.add(cm, 1, r++);
         g.add(cp, 1, r++);
         g.add(cs, 1, r++);
-        g.add(new Label("To put right before saving:"), 0, r++, 2, 1);
+        g.add(new Label(tr("form.toPutRight")), 0, r++, 2, 1);
         g.add(problems, 0, r, 2, 1);
         d.getDialogPane().setContent(g);
         d.getDialogPane().getButtonTypes().addAll(ButtonType.CANCEL, ButtonType.OK);

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import org.shapetrail.store.RecordSource;
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -86,17 +88,16 @@ public final class PersonFormViewModel {
         try {
             double v = Double.parseDouble(t.strip().replace(sep, '.'));
             if (v < 3) {
-                out.add(what + " " + t.strip() + " looks like metres; enter it in cm, e.g. " + Numbers.fmt(locale, v * 100, 1)
-                        + ".");
+                out.add(tr("form.metres", what, t.strip(), Numbers.fmt(locale, v * 100, 1)));
                 return null;
             }
             if (v < 120 || v > 230) {
-                out.add(what + " " + t.strip() + " cm is outside 120–230 cm; check the value.");
+                out.add(tr("form.range", what, t.strip()));
                 return null;
             }
             return v;
         } catch (NumberFormatException e) {
-            out.add(what + " \"" + t.strip() + "\" is not a number; enter it in cm.");
+            out.add(tr("form.notNumber", what, t.strip()));
             return null;
         }
     }
@@ -112,22 +113,22 @@ public final class PersonFormViewModel {
     private Checked validate() {
         List<String> out = new ArrayList<>();
         if (name.get() == null || name.get().isBlank()) {
-            out.add("Enter the person's name.");
+            out.add(tr("form.enterName"));
         } else {
             org.shapetrail.store.TextRules.problem(org.shapetrail.store.TextRules.Field.PERSON_NAME, name.get().strip())
                     .ifPresent(w -> out.add(Character.toUpperCase(w.charAt(0)) + w.substring(1) + "."));
         }
         if (sex.get() == null) {
-            out.add("Choose the sex recorded for the growth equations.");
+            out.add(tr("form.chooseSex"));
         }
         if (birth.get() == null) {
-            out.add("Enter the date of birth.");
+            out.add(tr("form.enterBirth"));
         } else if (birth.get().isAfter(LocalDate.now())) {
-            out.add("The date of birth is in the future.");
+            out.add(tr("form.futureBirth"));
         }
-        Double f = stature("Father's stature", father.get(), out);
-        Double m = stature("Mother's stature", mother.get(), out);
-        Double p = stature("Predicted adult stature", predicted.get(), out);
+        Double f = stature(tr("form.fatherName"), father.get(), out);
+        Double m = stature(tr("form.motherName"), mother.get(), out);
+        Double p = stature(tr("form.predictedName"), predicted.get(), out);
         if (!out.isEmpty()) {
             return new Checked(null, out);
         }

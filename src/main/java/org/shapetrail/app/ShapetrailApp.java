@@ -61,7 +61,7 @@ public final class ShapetrailApp extends Application {
             probe("toolkit-started");
         }
         RecordSource start = chooseStart(getParameters() == null ? List.of() : getParameters().getRaw());
-        show(stage, start, new FxTaskRunner(), Locale.getDefault(Locale.Category.FORMAT), true);
+        show(stage, start, new FxTaskRunner(), Languages.atStart(), true);
     }
 
     static void probe(String what) {
@@ -128,6 +128,30 @@ public final class ShapetrailApp extends Application {
         return javafx.stage.Screen.getPrimary().getVisualBounds();
     }
 
+    /** The workbench the window shows now (a new one after each change of language). */
+    public static Workbench workbenchOf(Stage stage) {
+        return (Workbench) stage.getProperties().get(Workbench.class);
+    }
+
+    /**
+     * Makes a language chosen in the settings apply at once: the window's content is built again in it
+     * around the same state (the open record, the selected person, the page, the filters), and the record's
+     * results are computed again so that their sentences are in the new language too.
+     */
+    private static void speakOnChoice(Stage stage, Workbench workbench) {
+        stage.getProperties().put(Workbench.class, workbench);
+        workbench.onSpeak(locale -> {
+            Workbench earlier = workbenchOf(stage);
+            org.shapetrail.i18n.Messages.use(locale);
+            earlier.retire();
+            Workbench now = new Workbench(earlier.viewModel(), locale);
+            speakOnChoice(stage, now);
+            now.continueFrom(earlier);
+            stage.getScene().setRoot(now.root());
+            earlier.viewModel().reload();
+        });
+    }
+
     /** Builds and shows the window on {@code file}; tests call this with their own runner and locale. */
     public static Workbench show(Stage stage, Path file, TaskRunner runner, Locale locale, boolean remember) {
         return show(stage, RecordSource.of(file), runner, locale, remember);
@@ -141,8 +165,10 @@ public final class ShapetrailApp extends Application {
         }
         stage.setUserData(vm);
         stage.addEventHandler(javafx.stage.WindowEvent.WINDOW_HIDDEN, e -> vm.letGo());
+        org.shapetrail.i18n.Messages.use(locale);
         Workbench workbench = new Workbench(vm, locale);
         probe("workbench-built");
+        speakOnChoice(stage, workbench);
         double width = defaultWidth();
         double height = defaultHeight();
         Scene scene = new Scene(workbench.root(), remember ? PREFS.getDouble("width", width) : width,
@@ -151,13 +177,13 @@ public final class ShapetrailApp extends Application {
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.F, KeyCombination.SHORTCUT_DOWN),
                 () -> scene.lookup("#search").requestFocus());
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.N, KeyCombination.SHORTCUT_DOWN),
-                workbench::enterVisit);
+                () -> workbenchOf(stage).enterVisit());
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.DIGIT1, KeyCombination.SHORTCUT_DOWN),
-                () -> workbench.pages().getSelectionModel().select(0));
+                () -> workbenchOf(stage).pages().getSelectionModel().select(0));
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.DIGIT2, KeyCombination.SHORTCUT_DOWN),
-                () -> workbench.pages().getSelectionModel().select(1));
+                () -> workbenchOf(stage).pages().getSelectionModel().select(1));
         scene.getAccelerators().put(new KeyCodeCombination(KeyCode.DIGIT3, KeyCombination.SHORTCUT_DOWN),
-                () -> workbench.pages().getSelectionModel().select(2));
+                () -> workbenchOf(stage).pages().getSelectionModel().select(2));
         stage.setTitle(NAME);
         stage.setScene(scene);
         if (remember) {

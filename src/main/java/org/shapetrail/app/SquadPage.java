@@ -36,7 +36,7 @@ public record SquadPage(String summary, List<PersonRow> members, List<String> bl
                 VisitResult r = rated.get(rated.size() - 1);
                 latest.add(r.somatotype().rating());
                 chart.point(r.somatotype().rating(), "person:" + id, h.person().displayName() + "\n"
-                        + r.visit().measuredAt().toLocalDate() + "\n" + r.somatotype().rating().toDisplayString(),
+                        + r.visit().measuredAt().toLocalDate() + "\n" + r.somatotype().rating().toDisplayString(locale),
                         Palette.series(0), MarkerShape.CIRCLE);
             }
         }
@@ -47,7 +47,7 @@ public record SquadPage(String summary, List<PersonRow> members, List<String> bl
             RatingSummary s = RatingSummary.of(latest);
             chart.groupMean(squad.name(), s, Palette.ACCENT);
             summary = members.size() + " current members, " + s.n() + " rated. Mean somatotype "
-                    + s.meanRating().toDisplayString() + "; SAM " + Numbers.fmt(locale, s.sam(), 2)
+                    + s.meanRating().toDisplayString(locale) + "; SAM " + Numbers.fmt(locale, s.sam(), 2)
                     + " (mean distance of each member's latest rating from the mean); SDI "
                     + Numbers.fmt(locale, s.sdi(), 2) + ".";
         }

@@ -100,7 +100,7 @@ public final class VisitEntryView {
         GridPane grid = new GridPane();
         grid.setHgap(8);
         grid.setVgap(4);
-        grid.getColumnConstraints().addAll(new ColumnConstraints(250), new ColumnConstraints(80),
+        grid.getColumnConstraints().addAll(new ColumnConstraints(310), new ColumnConstraints(80),
                 new ColumnConstraints(80), new ColumnConstraints(80), new ColumnConstraints(360));
         grid.addRow(0, header(tr("entry.site")), header(tr("entry.trial", 1)), header(tr("entry.trial", 2)),
                 header(tr("entry.trial", 3)), header(""));
@@ -140,12 +140,12 @@ public final class VisitEntryView {
         method.setConverter(new StringConverter<>() {
             @Override
             public String toString(RatingMethod m) {
-                return m == null ? "" : m.code();
+                return m == null ? "" : tr("rater.method." + m.name());
             }
 
             @Override
             public RatingMethod fromString(String s) {
-                return RatingMethod.ofCode(s);
+                return null; // chosen from the list only
             }
         });
         Label raterCmp = new Label();

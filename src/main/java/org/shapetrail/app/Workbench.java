@@ -41,6 +41,9 @@ public final class Workbench {
     private TabPane squadViews;
     private MeasurersPageView measurers;
     private final ToggleButton dark = new ToggleButton(tr("window.dark"));
+    /** The name of what is open; its whole path is in the tooltip. */
+    private final Label file = new Label();
+    private final javafx.scene.control.Tooltip where = new javafx.scene.control.Tooltip();
 
     public Workbench(WorkbenchViewModel vm, Locale locale) {
         ctx = new WorkbenchContext(vm, locale, () -> root.getScene().getWindow());
@@ -55,27 +58,67 @@ public final class Workbench {
         root.setCenter(body());
         root.disableProperty().bind(ctx.storing);
         root.setBottom(footer());
-        vm.loadedProperty().addListener((o, a, b) -> refreshPages());
-        vm.selectedProperty().addListener((o, a, b) -> person.refresh());
+        vm.loadedProperty().addListener((o, a, b) -> {
+            if (ctx.live()) {
+                refreshPages();
+            }
+        });
+        vm.selectedProperty().addListener((o, a, b) -> {
+            if (ctx.live()) {
+                person.refresh();
+            }
+        });
+        if (vm.loadedProperty().get() != null) { // built again for another language: show what is open now
+            showSource(vm.loadedProperty().get());
+            refreshPages();
+        }
+    }
+
+    /** The file bar's name of what is open, and the buttons the account may use. */
+    private void showSource(Loaded b) {
+        file.setText(b == null ? "" : b.source().title() + (b.account().isEmpty() ? "" : " · " + b.account()));
+        where.setText(b == null ? "" : b.source().name());
+        if (b != null && b.source() instanceof org.shapetrail.store.RecordSource.Server s) {
+            ServerConnectDialog.remember(s.address());
+        }
+        fitToRole(b);
+    }
+
+    /** What choosing a language does (the application builds the window again in it). */
+    public void onSpeak(java.util.function.Consumer<Locale> c) {
+        ctx.onSpeak(c);
+    }
+
+    /** This workbench has been replaced by one in another language: it stops following the state. */
+    void retire() {
+        ctx.retire();
+    }
+
+    /**
+     * Takes the place of an earlier workbench of the same window: the same page, the same squad view,
+     * the same theme.
+     */
+    void continueFrom(Workbench earlier) {
+        dark.setSelected(earlier.dark.isSelected());
+        int squadView = earlier.squadViews == null ? 0 : earlier.squadViews.getSelectionModel().getSelectedIndex();
+        pages.getSelectionModel().select(earlier.pages.getSelectionModel().getSelectedIndex());
+        if (squadViews != null) {
+            squadViews.getSelectionModel().select(squadView);
+        }
     }
 
     private Parent header() {
         Label title = new Label(ShapetrailApp.NAME);
         title.setId("app-title");
         title.getStyleClass().add("app-title");
-        Label file = new Label();
         file.setId("file-name");
         file.getStyleClass().add("app-subtitle");
         // the file's name; its whole path is in the tooltip (a long temporary path would push the buttons away)
-        javafx.scene.control.Tooltip where = new javafx.scene.control.Tooltip();
         file.setTooltip(where);
         ctx.vm.loadedProperty().addListener((o, a, b) -> {
-            file.setText(b == null ? "" : b.source().title() + (b.account().isEmpty() ? "" : " · " + b.account()));
-            where.setText(b == null ? "" : b.source().name());
-            if (b != null && b.source() instanceof org.shapetrail.store.RecordSource.Server s) {
-                ServerConnectDialog.remember(s.address());
+            if (ctx.live()) {
+                showSource(b);
             }
-            fitToRole(b);
         });
         Button open = new Button(tr("window.open"));
         open.setId("open-file");
@@ -84,7 +127,7 @@ public final class Workbench {
         connect.setId("connect-server");
         connect.setOnAction(e -> connectToServer(null, null));
         ctx.vm.passwordWantedProperty().addListener((o, a, server) -> {
-            if (server != null) {
+            if (server != null && ctx.live()) {
                 javafx.application.Platform.runLater(() -> connectToServer(server.address().toString(),
                         tr("window.password.wanted", server.address().host(), server.address().user())));
             }

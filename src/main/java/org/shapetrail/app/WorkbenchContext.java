@@ -24,6 +24,9 @@ final class WorkbenchContext {
     /** True while something is being written: the window takes no input meanwhile. */
     final BooleanProperty storing = new SimpleBooleanProperty();
     private LongConsumer showPerson = id -> { };
+    private java.util.function.Consumer<Locale> speak = l -> { };
+    /** True once the window has a newer workbench (another language): this one then ignores the state. */
+    private boolean retired;
 
     WorkbenchContext(WorkbenchViewModel vm, Locale locale, Supplier<Window> window) {
         this.vm = vm;
@@ -38,6 +41,24 @@ final class WorkbenchContext {
     /** The open file as read, or null before one is open. */
     Loaded loaded() {
         return vm.loadedProperty().get();
+    }
+
+    /** What choosing a language does: the window is built again in it, on the same page. */
+    void onSpeak(java.util.function.Consumer<Locale> c) {
+        speak = c;
+    }
+
+    void speak(Locale locale) {
+        speak.accept(locale);
+    }
+
+    void retire() {
+        retired = true;
+    }
+
+    /** False once this workbench has been replaced: its listeners on the shared state then do nothing. */
+    boolean live() {
+        return !retired;
     }
 
     void onShowPerson(LongConsumer c) {

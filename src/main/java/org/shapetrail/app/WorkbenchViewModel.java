@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.nio.file.Path;
 import org.shapetrail.store.RecordSource;
 import org.shapetrail.store.StaffRole;
@@ -35,15 +37,17 @@ import org.shapetrail.store.Squad;
  */
 public final class WorkbenchViewModel {
     /** The filter's choice of "every squad". */
-    public static final String ALL_SQUADS = "All squads";
+    public static String allSquads() {
+        return tr("window.allSquads");
+    }
 
     private final TaskRunner runner;
     private final ObjectProperty<Loaded> loaded = new SimpleObjectProperty<>();
     private final ObservableList<PersonRow> allRows = FXCollections.observableArrayList();
     private final ObservableList<PersonRow> rows = FXCollections.observableArrayList();
-    private final ObservableList<String> squads = FXCollections.observableArrayList(ALL_SQUADS);
+    private final ObservableList<String> squads = FXCollections.observableArrayList(allSquads());
     private final StringProperty search = new SimpleStringProperty("");
-    private final StringProperty squad = new SimpleStringProperty(ALL_SQUADS);
+    private final StringProperty squad = new SimpleStringProperty(allSquads());
     private final ObjectProperty<AgeBand> ageBand = new SimpleObjectProperty<>(AgeBand.ALL);
     private final ObjectProperty<MaturityStatus> maturity = new SimpleObjectProperty<>();
     private final BooleanProperty rapidOnly = new SimpleBooleanProperty(false);
@@ -79,10 +83,10 @@ public final class WorkbenchViewModel {
     public void open(RecordSource source) {
         error.set("");
         claimFor(source);
-        status.set("Opening " + source.title() + " …");
+        status.set(tr("window.opening.named", source.title()));
         AnalysisSettings s = settings;
         passwordWanted.set(null);
-        runner.run("Opening " + source.title(), progress -> load(source, s, progress), this::show, t -> {
+        runner.run(tr("window.opening.task", source.title()), progress -> load(source, s, progress), this::show, t -> {
             if (source instanceof RecordSource.Server server && t.getMessage() != null
                     && t.getMessage().contains("password")) {
                 passwordWanted.set(server); // the window asks for it (and for the address again)
@@ -99,12 +103,11 @@ public final class WorkbenchViewModel {
     public void createAndOpen(Path file) {
         error.set("");
         if (java.nio.file.Files.exists(file)) {
-            error.set("The file " + file.getFileName() + " already exists; choose a new name, or open it with"
-                    + " Open file….");
+            error.set(tr("window.exists", file.getFileName()));
             return;
         }
         AnalysisSettings s = settings;
-        runner.run("Creating " + file.getFileName(), progress -> {
+        runner.run(tr("window.creating", file.getFileName()), progress -> {
             try (Database db = Database.open(file)) {
                 db.schemaVersion(); // created and brought to the current schema
             }
@@ -132,7 +135,7 @@ public final class WorkbenchViewModel {
                 throw new InterruptedException("cancelled");
             }
             histories.put(p.id(), b.history(p));
-            progress.update(++i, n, "Computing " + i + " of " + n);
+            progress.update(++i, n, tr("window.computing", i, n));
         }
         return new Loaded(source, b, histories, role, actor);
     }
@@ -142,9 +145,8 @@ public final class WorkbenchViewModel {
         settings = s;
         Loaded l = loaded.get();
         if (l != null) {
-            runner.run("Recomputing", progress -> load(l.source(), s, progress), this::show, t -> {
-                status.set(t instanceof InterruptedException ? "Recomputing was cancelled; the earlier results stay."
-                        : "");
+            runner.run(tr("window.recomputing"), progress -> load(l.source(), s, progress), this::show, t -> {
+                status.set(t instanceof InterruptedException ? tr("window.recompute.cancelled") : "");
                 if (!(t instanceof InterruptedException)) {
                     error.set(Errors.describe(t));
                 }
@@ -187,8 +189,7 @@ public final class WorkbenchViewModel {
         } else {
             unclaimed = abs;
             readOnlyNote.set(org.shapetrail.store.FileClaim.holder(abs)
-                    .map(who -> "Read-only: " + abs.getFileName() + " is open for editing in " + who + ". You can look"
-                            + " at everything here; to enter or change anything, close it there and open it again here.")
+                    .map(who -> tr("window.readOnly", abs.getFileName(), who))
                     .orElse(""));
         }
     }
@@ -240,8 +241,7 @@ public final class WorkbenchViewModel {
             try (Database db = source.open()) {
                 got = db.listenForChanges(table -> javafx.application.Platform.runLater(() -> heard(source, table)));
             } catch (RuntimeException e) {
-                javafx.application.Platform.runLater(() -> error.set("Changes saved at other desks will not show until"
-                        + " you reload: " + Errors.describe(e)));
+                javafx.application.Platform.runLater(() -> error.set(tr("window.notListening", Errors.describe(e))));
                 return;
             }
             javafx.application.Platform.runLater(() -> {
@@ -264,10 +264,9 @@ public final class WorkbenchViewModel {
         }
         if (table.isEmpty()) {
             hearingOthers.set(false);
-            error.set("The connection to " + source.title() + " was lost; saves will say so."
-                    + " Reopen it with Connect to a server….");
+            error.set(tr("window.connectionLost", source.title()));
         } else {
-            status.set("Changes saved at another desk: reloading …");
+            status.set(tr("window.othersSaved"));
             reload();
         }
     }
@@ -305,14 +304,14 @@ public final class WorkbenchViewModel {
         loaded.set(l);
         Academy a = l.builder().academy();
         List<String> names = new ArrayList<>();
-        names.add(ALL_SQUADS);
+        names.add(allSquads());
         a.squads().forEach(s -> names.add(s.name()));
         squads.setAll(names);
         if (!names.contains(squad.get())) {
-            squad.set(ALL_SQUADS);
+            squad.set(allSquads());
         }
         fillRows();
-        status.set(l.source().title() + ": " + a.people().size() + " people, " + a.visits().size() + " visits");
+        status.set(tr("window.loadedStatus", l.source().title(), a.people().size(), a.visits().size()));
     }
 
     /** Every person's line for the period chosen, filtered; the selection is kept. */
@@ -372,7 +371,7 @@ public final class WorkbenchViewModel {
         }
         var g = h.growth();
         return new PersonRow(p.id(), p.displayName(), squadName, last.map(v -> v.ageYears()).orElse(Double.NaN),
-                lastRated == null ? "" : lastRated.somatotype().rating().toDisplayString(),
+                lastRated == null ? "" : lastRated.somatotype().rating().toDisplayString(org.shapetrail.i18n.Messages.current()),
                 lastRated == null ? "" : lastRated.somatotype().category().displayName(), change, from, to,
                 g.velocity().map(v -> v.perYear()).orElse(Double.NaN),
                 g.velocity().map(v -> v.sePerYear()).orElse(Double.NaN),
@@ -392,7 +391,7 @@ public final class WorkbenchViewModel {
         String q = fold(search.get());
         Loaded l = loaded.get();
         List<Long> inSquad = null;
-        if (l != null && !ALL_SQUADS.equals(squad.get())) {
+        if (l != null && !allSquads().equals(squad.get())) {
             Academy a = l.builder().academy();
             inSquad = a.squads().stream().filter(s -> s.name().equals(squad.get())).findFirst()
                     .map(s -> a.membersOn(s.id(), LocalDate.now())).orElse(List.of());

@@ -301,7 +301,7 @@ public final class SomatochartBuilder {
                 under.add(new Primitive.Segment(from, at, true, stepStyle(v, colour)));
                 lines.add(new Point[] {from, at});
             }
-            String tip = name + "\n" + p.date() + "\n" + p.rating().toDisplayString();
+            String tip = name + "\n" + p.date() + "\n" + p.rating().toDisplayString(locale);
             boolean last = i == ordered.size() - 1;
             over.add(new Primitive.Marker(at, shape, last ? 9 : 7,
                     last ? Style.filled(colour, Palette.INK, 1) : Style.filled(Palette.PAPER, colour, 1.6), p.id(), tip));
@@ -320,7 +320,7 @@ public final class SomatochartBuilder {
                     Style.dashed(colour, 1.2, 5, 3)));
         }
         over.add(new Primitive.Marker(at, MarkerShape.DIAMOND, 12, Style.filled(colour, Palette.INK, 1.2), null,
-                name + " mean " + s.meanRating().toDisplayString() + "\nSAM " + String.format(Locale.ROOT, "%.2f",
+                name + " mean " + s.meanRating().toDisplayString(locale) + "\nSAM " + String.format(Locale.ROOT, "%.2f",
                         s.sam())));
         reserved.add(new Object[] {at, 12.0});
         wanted.add(new Object[] {at, name, 9.0, colour});

@@ -1,0 +1,43 @@
+package org.shapetrail.app;
+
+import java.util.Locale;
+import org.shapetrail.i18n.Messages;
+
+/**
+ * The window's language: the one chosen in the settings (kept with the window's settings), else the
+ * system's. Numbers and dates follow it too (decimal comma in Spanish and Portuguese).
+ */
+final class Languages {
+    /** The settings key of the chosen language: "", "en", "es" or "pt". */
+    static final String KEY = "language";
+
+    private Languages() {
+    }
+
+    /** The system's own locale (its formats), as the JVM started with it. */
+    static Locale system() {
+        return Locale.getDefault(Locale.Category.FORMAT);
+    }
+
+    /** The choice in the settings: "" (as the system) or a language code of ours. */
+    static String chosen() {
+        String c = ShapetrailApp.PREFS.get(KEY, SettingsPageView.SYSTEM);
+        return Messages.LANGUAGES.contains(c) ? c : SettingsPageView.SYSTEM;
+    }
+
+    /** Keeps a choice and gives the locale it means. */
+    static Locale choose(String code) {
+        ShapetrailApp.PREFS.put(KEY, code);
+        return SettingsPageView.localeOf(code);
+    }
+
+    /** The locale the window starts in. */
+    static Locale atStart() {
+        return SettingsPageView.localeOf(chosen());
+    }
+
+    /** A language's name in itself: English, Español, Português. */
+    static String nameOf(String code) {
+        return Messages.get(Locale.forLanguageTag(code), "letter.language");
+    }
+}
