@@ -48,6 +48,6 @@ public final class ArchiveTraining {
                 }
             }
         }
-        System.out.println("loaded " + loaded + " classes for the archive");
+        System.out.println("loaded " + loaded + " classes for the archive"); // not words: a build step's log
     }
 }

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.Locale;
 import java.util.Optional;
 import javafx.collections.FXCollections;
@@ -29,10 +31,10 @@ final class BlockFormView {
     static Optional<TrainingBlock> show(BlockFormViewModel vm, Window owner, Locale locale) {
         Dialog<ButtonType> d = new Dialog<>();
         d.initOwner(owner);
-        d.setTitle((vm.isEdit() ? "Edit training block — " : "New training block — ") + vm.squad().name());
+        d.setTitle(tr(vm.isEdit() ? "blockform.title.edit" : "blockform.title.new", vm.squad().name()));
         TextField name = new TextField();
         name.setId("block-name");
-        name.setPromptText("e.g. Pre-season strength block");
+        name.setPromptText(tr("blockform.name.prompt"));
         name.textProperty().bindBidirectional(vm.name);
         DatePicker start = DatePickers.of(null, locale);
         start.setId("block-start");
@@ -48,10 +50,10 @@ final class BlockFormView {
         GridPane head = new GridPane();
         head.setHgap(8);
         head.setVgap(6);
-        head.addRow(0, new Label("Name"), name);
-        head.addRow(1, new Label("First day"), start);
-        head.addRow(2, new Label("Last day"), end);
-        head.addRow(3, new Label("Aim"), aim);
+        head.addRow(0, new Label(tr("blockform.name")), name);
+        head.addRow(1, new Label(tr("blockform.first")), start);
+        head.addRow(2, new Label(tr("blockform.last")), end);
+        head.addRow(3, new Label(tr("blockform.aim")), aim);
         GridPane members = new GridPane();
         members.setId("block-members");
         members.setHgap(8);
@@ -65,13 +67,10 @@ final class BlockFormView {
         ListView<String> problems = new ListView<>(vm.problems);
         problems.setId("block-problems");
         problems.setPrefHeight(70);
-        Label hint = new Label("Before and after: by default each member's latest rated visit in the "
-                + org.shapetrail.history.BlockReview.DEFAULT_WINDOW_DAYS + " days up to the first day and earliest in the "
-                + org.shapetrail.history.BlockReview.DEFAULT_WINDOW_DAYS + " days from the last; choose others if they"
-                + " stand better for the block.");
+        Label hint = new Label(tr("blockform.hint", org.shapetrail.history.BlockReview.DEFAULT_WINDOW_DAYS));
         hint.setWrapText(true);
         hint.getStyleClass().add("hint");
-        VBox box = new VBox(8, head, hint, scroll, new Label("To put right before saving:"), problems);
+        VBox box = new VBox(8, head, hint, scroll, new Label(tr("blockform.toPutRight")), problems);
         box.setPadding(new Insets(10));
         box.setPrefWidth(640);
         d.getDialogPane().setContent(box);
@@ -86,9 +85,10 @@ final class BlockFormView {
 
     private static void fillMembers(GridPane g, BlockFormViewModel vm, Locale locale) {
         g.getChildren().clear();
-        g.addRow(0, new Label("Member"), new Label("Before"), new Label("After"));
+        g.addRow(0, new Label(tr("blockform.member")), new Label(tr("blockform.before")),
+                new Label(tr("blockform.after")));
         if (vm.members.isEmpty()) {
-            g.add(new Label("Nobody was in the squad between the first and the last day."), 0, 1, 3, 1);
+            g.add(new Label(tr("blockform.nobody")), 0, 1, 3, 1);
         }
         int r = 1;
         for (BlockFormViewModel.Member m : vm.members) {
@@ -107,9 +107,9 @@ final class BlockFormView {
         c.setConverter(new StringConverter<>() {
             @Override
             public String toString(VisitResult v) {
-                return v == null ? "none (left out)" : v.visit().measuredAt().toLocalDate().format(
+                return v == null ? tr("blockform.leftOut") : v.visit().measuredAt().toLocalDate().format(
                         java.time.format.DateTimeFormatter.ofLocalizedDate(java.time.format.FormatStyle.MEDIUM)
-                                .withLocale(locale)) + " · " + v.somatotype().rating().toDisplayString();
+                                .withLocale(locale)) + " · " + v.somatotype().rating().toDisplayString(locale);
             }
 
             @Override

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import org.shapetrail.store.RecordSource;
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -185,31 +187,30 @@ public final class BlockFormViewModel {
         List<String> out = new ArrayList<>();
         String n = name.get() == null ? "" : name.get().strip();
         if (n.isEmpty()) {
-            out.add("Enter the block's name.");
+            out.add(tr("blockform.enterName"));
         } else {
             TextRules.problem(TextRules.Field.BLOCK_NAME, n).ifPresent(w -> out.add(sentence(w)));
             boolean taken = loaded.builder().academy().blocks().stream().anyMatch(b -> b.name().strip()
                     .equalsIgnoreCase(n) && (editing == null || b.id() != editing.id()));
             if (taken) {
-                out.add("There is already a training block called " + n + "; give this one another name.");
+                out.add(tr("blockform.nameTaken", n));
             }
         }
         TextRules.problem(TextRules.Field.BLOCK_AIM, aim.get()).ifPresent(w -> out.add(sentence(w)));
         if (start.get() == null) {
-            out.add("Enter the block's first day.");
+            out.add(tr("blockform.enterFirst"));
         }
         if (end.get() == null) {
-            out.add("Enter the block's last day.");
+            out.add(tr("blockform.enterLast"));
         }
         if (start.get() != null && end.get() != null && end.get().isBefore(start.get())) {
-            out.add("The last day (" + end.get() + ") is before the first day (" + start.get() + ").");
+            out.add(tr("blockform.order", end.get(), start.get()));
         }
         for (Member m : members) {
             if (m.before.get() != null && m.after.get() != null
                     && !m.before.get().visit().measuredAt().isBefore(m.after.get().visit().measuredAt())) {
-                out.add(m.person.displayName() + ": the before visit (" + m.before.get().visit().measuredAt()
-                        .toLocalDate() + ") must be earlier than the after visit (" + m.after.get().visit().measuredAt()
-                        .toLocalDate() + ").");
+                out.add(tr("blockform.visitOrder", m.person.displayName(), m.before.get().visit().measuredAt()
+                        .toLocalDate(), m.after.get().visit().measuredAt().toLocalDate()));
             }
         }
         return out;

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -28,26 +30,22 @@ public record BlockPage(String summary, List<String> athletes, List<AthleteLine>
         BlockResult g = r.result();
         String summary;
         if (g == null) {
-            summary = r.block().name() + ": fewer than two athletes have visits near both the start and the end.";
+            summary = tr("block.tooFew", r.block().name());
         } else {
             StringBuilder sb = new StringBuilder();
-            sb.append(r.block().name()).append(" (").append(r.block().startsOn()).append(" to ").append(r.block().endsOn())
-                    .append("): ").append(g.n()).append(" athletes with both visits. ");
-            sb.append(g.beyondNoise()).append(" of ").append(g.n()).append(" changed beyond measurement noise. ");
-            sb.append("Group mean ").append(g.before().meanRating().toDisplayString(locale)).append(" → ")
-                    .append(g.after().meanRating().toDisplayString(locale)).append(" (SAD ")
-                    .append(Numbers.fmt(locale, g.sadBetweenMeans(), 2)).append("). ");
+            sb.append(tr("block.head", r.block().name(), r.block().startsOn(), r.block().endsOn(), g.n()));
+            sb.append(tr("block.beyond", g.beyondNoise(), g.n()));
+            sb.append(tr("block.means", g.before().meanRating().toDisplayString(locale),
+                    g.after().meanRating().toDisplayString(locale), Numbers.fmt(locale, g.sadBetweenMeans(), 2)));
             if (g.hotelling() != null) {
-                sb.append("Three components together: Hotelling T² ").append(Numbers.fmt(locale, g.hotelling().t2(), 1))
-                        .append(", F(").append(g.hotelling().df1()).append(", ").append(g.hotelling().df2()).append(") = ")
-                        .append(Numbers.fmt(locale, g.hotelling().f(), 2)).append(", p = ")
-                        .append(Numbers.fmt(locale, g.hotelling().pValue(), 4)).append(g.hotelling().pValue() < 0.05
-                                ? " — the group's shape changed." : " — no clear change of the group as a whole.");
+                sb.append(tr("block.hotelling", Numbers.fmt(locale, g.hotelling().t2(), 1), g.hotelling().df1(),
+                        g.hotelling().df2(), Numbers.fmt(locale, g.hotelling().f(), 2),
+                        Numbers.fmt(locale, g.hotelling().pValue(), 4)));
+                sb.append(tr(g.hotelling().pValue() < 0.05 ? "block.changed" : "block.unclear"));
             }
             for (ComponentTest c : g.components()) {
-                sb.append(" ").append(c.component().label()).append(" ").append(Numbers.fmt(locale, c.meanDifference(), 2))
-                        .append(" (p ").append(Numbers.fmt(locale, c.pValue(), 3)).append(", dz ")
-                        .append(Numbers.fmt(locale, c.effectSize(), 2)).append(").");
+                sb.append(tr("block.component", c.component().shown(), Numbers.fmt(locale, c.meanDifference(), 2),
+                        Numbers.fmt(locale, c.pValue(), 3), Numbers.fmt(locale, c.effectSize(), 2)));
             }
             summary = sb.toString();
         }
@@ -67,15 +65,15 @@ public record BlockPage(String summary, List<String> athletes, List<AthleteLine>
             String colour = a.change().verdict() == Verdict.BEYOND_NOISE ? Palette.series(0) : Palette.MUTED;
             chart.arrow(a.change().from(), a.change().to(), a.change().verdict(), colour);
             chart.point(a.change().to(), null, a.person().displayName() + "\n" + a.change().to().toDisplayString(locale) + "\n"
-                    + a.change().verdict().words(), colour, MarkerShape.CIRCLE);
+                    + a.change().verdict().shown(), colour, MarkerShape.CIRCLE);
         }
         List<String> left = r.missing().stream().map(m -> m.person().displayName() + ": " + m.reason()).toList();
         ChartModel profile = null;
         if (g != null) {
-            chart.groupMean("before", g.before(), Palette.MUTED);
-            chart.groupMean("after", g.after(), Palette.ACCENT);
-            profile = new ProfileChartBuilder(r.block().name()).line("before", g.before().meanRating(), sds(r, true))
-                    .line("after", g.after().meanRating(), sds(r, false)).build();
+            chart.groupMean(tr("block.before"), g.before(), Palette.MUTED);
+            chart.groupMean(tr("block.after"), g.after(), Palette.ACCENT);
+            profile = new ProfileChartBuilder(r.block().name()).line(tr("block.before"), g.before().meanRating(), sds(r, true))
+                    .line(tr("block.after"), g.after().meanRating(), sds(r, false)).build();
         }
         return new BlockPage(summary, athletes, rows, left, chart.buildAroundData(8), h -> chart.buildAroundData(8, h),
                 profile);

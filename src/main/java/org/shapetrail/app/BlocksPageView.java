@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import org.shapetrail.store.RecordSource;
 import java.util.List;
 import java.util.Optional;
@@ -26,9 +28,9 @@ final class BlocksPageView {
     private final ComboBox<String> blockChoice = new ComboBox<>();
     private final Label summary = new Label();
     private final javafx.scene.control.TableView<BlockPage.AthleteLine> athletes = new javafx.scene.control.TableView<>();
-    private final javafx.scene.control.Button edit = new javafx.scene.control.Button("Edit block…");
-    private final javafx.scene.control.Button delete = new javafx.scene.control.Button("Delete block…");
-    private final javafx.scene.control.Button undo = new javafx.scene.control.Button("Undo");
+    private final javafx.scene.control.Button edit = new javafx.scene.control.Button(tr("blocks.edit"));
+    private final javafx.scene.control.Button delete = new javafx.scene.control.Button(tr("blocks.delete"));
+    private final javafx.scene.control.Button undo = new javafx.scene.control.Button(tr("blocks.undo"));
     /** The blocks deleted in this session, newest first, for undo. */
     private final java.util.Deque<TrainingBlock> deleted = new java.util.ArrayDeque<>();
     private final Label leftOut = new Label();
@@ -46,13 +48,12 @@ final class BlocksPageView {
         summary.setId("block-summary");
         summary.setWrapText(true);
         athletes.setId("block-athletes");
-        athletes.setPlaceholder(new Label("Nobody in the squad has visits for both ends of this block."));
-        column("Athlete", BlockPage.AthleteLine::name, null);
-        column("Before", BlockPage.AthleteLine::before, "The visit that stands for the start: date and rating");
-        column("After", BlockPage.AthleteLine::after, "The visit that stands for the end: date and rating");
-        column("Change ÷\nnoise limit", BlockPage.AthleteLine::change, "The change as a multiple of its noise limit"
-                + " (1.00 or more: beyond noise) and the verdict it reads as");
-        column("Moved\n(SAD)", BlockPage.AthleteLine::sad, "The distance moved, in somatotype units");
+        athletes.setPlaceholder(new Label(tr("blocks.nobody")));
+        column(tr("blocks.col.athlete"), BlockPage.AthleteLine::name, null);
+        column(tr("blocks.col.before"), BlockPage.AthleteLine::before, tr("blocks.col.before.tip"));
+        column(tr("blocks.col.after"), BlockPage.AthleteLine::after, tr("blocks.col.after.tip"));
+        column(tr("blocks.col.change"), BlockPage.AthleteLine::change, tr("blocks.col.change.tip"));
+        column(tr("blocks.col.sad"), BlockPage.AthleteLine::sad, tr("blocks.col.sad.tip"));
         athletes.setRowFactory(t -> new javafx.scene.control.TableRow<>() {
             @Override
             protected void updateItem(BlockPage.AthleteLine line, boolean empty) {
@@ -60,7 +61,7 @@ final class BlocksPageView {
                 setTooltip(empty || line == null ? null : new javafx.scene.control.Tooltip(line.words()));
             }
         });
-        javafx.scene.control.Button create = new javafx.scene.control.Button("New block…");
+        javafx.scene.control.Button create = new javafx.scene.control.Button(tr("blocks.new"));
         create.setId("new-block");
         create.setOnAction(e -> squad().ifPresent(s -> form(s, null)));
         edit.setId("edit-block");
@@ -78,8 +79,7 @@ final class BlocksPageView {
         profile.setId("block-profile");
         chart.setMinSize(280, 280);
         profile.setMinSize(220, 160);
-        Label key = new Label("Arrows: each athlete before → after; ━━ beyond noise  ╺ ╸ borderline  ┈┈ within noise;"
-                + " ◆ group means (grey before, amber after) with their dispersion");
+        Label key = new Label(tr("blocks.key"));
         key.getStyleClass().add("hint");
         key.setWrapText(true);
         javafx.scene.layout.FlowPane actions = new javafx.scene.layout.FlowPane(8, 6, squadChoice, blockChoice, create,
@@ -136,10 +136,8 @@ final class BlocksPageView {
 
     private void delete(TrainingBlock b) {
         javafx.scene.control.Alert a = new javafx.scene.control.Alert(javafx.scene.control.Alert.AlertType.CONFIRMATION,
-                "Delete the training block " + b.name() + " (" + b.startsOn() + " to " + b.endsOn() + ")? The visits"
-                        + " stay; only the block and its choice of visits go. You can undo this until you close"
-                        + " Shapetrail.", javafx.scene.control.ButtonType.CANCEL, javafx.scene.control.ButtonType.OK);
-        a.setHeaderText("Delete training block");
+                tr("blocks.delete.ask", b.name(), b.startsOn(), b.endsOn()), javafx.scene.control.ButtonType.CANCEL, javafx.scene.control.ButtonType.OK);
+        a.setHeaderText(tr("blocks.delete.title"));
         a.initOwner(ctx.window());
         if (a.showAndWait().orElse(javafx.scene.control.ButtonType.CANCEL) != javafx.scene.control.ButtonType.OK) {
             return;
@@ -155,7 +153,7 @@ final class BlocksPageView {
             deleted.push(b);
         }
         undo.setDisable(deleted.isEmpty());
-        undo.setText(deleted.isEmpty() ? "Undo" : "Undo the deletion of " + deleted.peek().name());
+        undo.setText(deleted.isEmpty() ? tr("blocks.undo") : tr("blocks.undo.what", deleted.peek().name()));
     }
 
     private void undoDelete() {
@@ -175,7 +173,7 @@ final class BlocksPageView {
             deleted.pop();
         }
         undo.setDisable(deleted.isEmpty());
-        undo.setText(deleted.isEmpty() ? "Undo" : "Undo the deletion of " + deleted.peek().name());
+        undo.setText(deleted.isEmpty() ? tr("blocks.undo") : tr("blocks.undo.what", deleted.peek().name()));
     }
 
     ComboBox<String> squadChoice() {
@@ -220,7 +218,7 @@ final class BlocksPageView {
         blockChoice.setValue(keep != null && names.contains(keep) ? keep : names.isEmpty() ? null
                 : names.get(names.size() - 1));
         if (names.isEmpty()) {
-            summary.setText("This squad has no training blocks.");
+            summary.setText(tr("blocks.none"));
             athletes.getItems().clear();
             leftOut.setText("");
             chart.setModel(null);
@@ -242,7 +240,7 @@ final class BlocksPageView {
                     summary.setText(page.summary());
                     athletes.getItems().setAll(page.rows());
                     fitted.fit(page.rows());
-                    leftOut.setText(page.leftOut().isEmpty() ? "" : "Left out: " + String.join("; ", page.leftOut()));
+                    leftOut.setText(page.leftOut().isEmpty() ? "" : tr("blocks.leftOut", String.join("; ", page.leftOut())));
                     chart.setLayout(page.chartAt());
                     profile.setModel(page.profile());
                 });

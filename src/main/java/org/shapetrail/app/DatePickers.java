@@ -54,7 +54,7 @@ final class DatePickers {
                         // the next form
                     }
                 }
-                throw new DateTimeParseException("not a date", s, 0);
+                throw new DateTimeParseException("not a date", s, 0); // not words: the picker keeps the last good date
             }
         };
     }

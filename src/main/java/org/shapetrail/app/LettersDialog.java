@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.time.LocalDate;
 import java.util.Optional;
 import javafx.geometry.Insets;
@@ -22,26 +24,29 @@ final class LettersDialog {
         Dialog<LetterSettings> d = new Dialog<>();
         d.initOwner(owner);
         d.setTitle(title);
-        d.setHeaderText("Progress letters: choose the period and who signs");
+        d.setHeaderText(tr("letters.header"));
         DatePicker from = DatePickers.of(LocalDate.now().minusYears(1), locale);
         from.setId("letters-from");
         DatePicker to = DatePickers.of(LocalDate.now(), locale);
         to.setId("letters-to");
-        TextField academy = new TextField("Saltmarsh Bay Sports Academy");
-        TextField sender = new TextField("the academy physiotherapist");
-        TextField role = new TextField("");
-        TextField contact = new TextField("via the academy office");
-        CheckBox skinfolds = new CheckBox("Also describe skinfold thickness for juniors under 16");
+        LetterSettings last = remembered(LocalDate.now().minusYears(1), LocalDate.now());
+        TextField academy = new TextField(last.academy());
+        academy.setId("letters-academy");
+        academy.setPromptText(tr("letters.academy.prompt"));
+        TextField sender = new TextField(last.sender());
+        TextField role = new TextField(last.senderRole());
+        TextField contact = new TextField(last.contact());
+        CheckBox skinfolds = new CheckBox(tr("letters.skinfolds"));
         GridPane g = new GridPane();
         g.setHgap(8);
         g.setVgap(6);
         g.setPadding(new Insets(10));
-        g.addRow(0, new Label("From"), from);
-        g.addRow(1, new Label("To"), to);
-        g.addRow(2, new Label("Academy"), academy);
-        g.addRow(3, new Label("Signed by"), sender);
-        g.addRow(4, new Label("Role"), role);
-        g.addRow(5, new Label("Contact"), contact);
+        g.addRow(0, new Label(tr("letters.from")), from);
+        g.addRow(1, new Label(tr("letters.to")), to);
+        g.addRow(2, new Label(tr("letters.academy")), academy);
+        g.addRow(3, new Label(tr("letters.sender")), sender);
+        g.addRow(4, new Label(tr("letters.role")), role);
+        g.addRow(5, new Label(tr("letters.contact")), contact);
         g.add(skinfolds, 1, 6);
         d.getDialogPane().setContent(g);
         d.getDialogPane().getButtonTypes().addAll(ButtonType.CANCEL, ButtonType.OK);
@@ -49,6 +54,26 @@ final class LettersDialog {
                 && !to.getValue().isBefore(from.getValue())
                 ? new LetterSettings(academy.getText(), sender.getText(), role.getText(), contact.getText(),
                 from.getValue(), to.getValue(), skinfolds.isSelected()) : null);
-        return d.showAndWait();
+        Optional<LetterSettings> chosen = d.showAndWait();
+        chosen.ifPresent(LettersDialog::remember);
+        return chosen;
+    }
+
+    /**
+     * The letter settings last used on this computer for a period (the academy's name, who signs, the
+     * contact); the first time, no academy name and the usual sender in the window's language.
+     */
+    static LetterSettings remembered(LocalDate from, LocalDate to) {
+        var p = ShapetrailApp.PREFS;
+        return new LetterSettings(p.get("letters.academy", ""), p.get("letters.sender", tr("preview.role")),
+                p.get("letters.role", ""), p.get("letters.contact", tr("preview.contact")), from, to, false);
+    }
+
+    private static void remember(LetterSettings s) {
+        var p = ShapetrailApp.PREFS;
+        p.put("letters.academy", s.academy());
+        p.put("letters.sender", s.sender());
+        p.put("letters.role", s.senderRole());
+        p.put("letters.contact", s.contact());
     }
 }

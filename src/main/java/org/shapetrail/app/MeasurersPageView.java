@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.List;
 import java.util.function.Function;
 import javafx.beans.property.SimpleStringProperty;
@@ -28,21 +30,19 @@ final class MeasurersPageView {
     MeasurersPageView(WorkbenchContext ctx) {
         this.ctx = ctx;
         tem.setId("tem-table");
-        column("Measurer", r -> r.measurer().name(), 120);
-        column("Site", r -> r.site().label(), 170);
-        column("People", r -> Integer.toString(r.estimate().people()), 60);
-        column("TEM", r -> Numbers.fmt(ctx.locale, r.estimate().duplicateTem(), 3) + " " + r.site().unit().symbol(), 80);
-        column("Relative TEM", r -> Numbers.fmt(ctx.locale, r.estimate().relativeTemPercent(), 2) + " %", 90);
-        column("Target", r -> "≤ " + Numbers.fmt(ctx.locale, TemTargets.target(r.site().kind()), 1) + " %", 60);
-        column("Standing", r -> r.standing().words(), 200);
-        column("Verdicts use", r -> r.usesDefault() ? "default TEM (too few people)" : "own TEM", 170);
-        Label note = new Label("TEM from the first two trials of every site and visit (duplicate form). Targets:"
-                + " skinfolds ≤ 5 % (≤ 7.5 % entry level), other measures ≤ 1 % (≤ 1.5 %); common practice."
-                + " Below " + DefaultErrors.MIN_PEOPLE + " people a site uses the default TEM.");
+        column(tr("measurers.col.measurer"), r -> r.measurer().name(), 120);
+        column(tr("measurers.col.site"), r -> r.site().shown(), 170);
+        column(tr("measurers.col.people"), r -> Integer.toString(r.estimate().people()), 60);
+        column(tr("measurers.col.tem"), r -> Numbers.fmt(ctx.locale, r.estimate().duplicateTem(), 3) + " " + r.site().unit().symbol(), 80);
+        column(tr("measurers.col.relative"), r -> Numbers.fmt(ctx.locale, r.estimate().relativeTemPercent(), 2) + " %", 90);
+        column(tr("measurers.col.target"), r -> "≤ " + Numbers.fmt(ctx.locale, TemTargets.target(r.site().kind()), 1) + " %", 60);
+        column(tr("measurers.col.standing"), r -> r.standing().shown(), 200);
+        column(tr("measurers.col.uses"), r -> r.usesDefault() ? tr("measurers.default") : tr("measurers.own"), 170);
+        Label note = new Label(tr("measurers.note", DefaultErrors.MIN_PEOPLE));
         note.setWrapText(true);
-        Button add = new Button("Add measurer…");
+        Button add = new Button(tr("measurers.add"));
         add.setId("add-measurer");
-        add.setOnAction(e -> ctx.askAndOrganise("Add measurer", "Name of the measurer (as visits will show it)",
+        add.setOnAction(e -> ctx.askAndOrganise(tr("measurers.add.title"), tr("measurers.add.prompt"),
                 (file, name) -> Organising.addMeasurer(file, name, "")));
         measurerList.setId("measurer-list");
         measurerList.setWrapText(true);
@@ -74,7 +74,7 @@ final class MeasurersPageView {
         stale = false;
         tem.getItems().setAll(l.builder().noise().temReport());
         List<String> names = l.builder().academy().measurers().stream().map(Measurer::name).toList();
-        measurerList.setText(names.isEmpty() ? "No measurers in this file yet: add one before the first visit."
-                : "Measurers in this file: " + String.join(", ", names));
+        measurerList.setText(names.isEmpty() ? tr("measurers.none")
+                : tr("measurers.list", String.join(", ", names)));
     }
 }

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import org.shapetrail.store.RecordSource;
 import java.time.LocalDate;
 import java.util.Locale;
@@ -21,12 +23,12 @@ final class Organising {
     static Optional<String> addMeasurer(RecordSource file, String name, String accreditation) {
         String n = name == null ? "" : name.strip();
         if (n.isEmpty()) {
-            return Optional.of("The measurer needs a name.");
+            return Optional.of(tr("organise.measurerName"));
         }
         try (Database db = file.open()) {
             return db.inTransaction(tx -> {
                 if (tx.measurers().all().stream().anyMatch(m -> same(m.name(), n))) {
-                    return Optional.of("There is already a measurer called " + n + " in this file.");
+                    return Optional.of(tr("organise.measurerTaken", n));
                 }
                 tx.measurers().insert(n, accreditation == null ? "" : accreditation.strip());
                 return Optional.<String>empty();
@@ -37,12 +39,12 @@ final class Organising {
     static Optional<String> addSquad(RecordSource file, String name) {
         String n = name == null ? "" : name.strip();
         if (n.isEmpty()) {
-            return Optional.of("The squad needs a name.");
+            return Optional.of(tr("organise.squadName"));
         }
         try (Database db = file.open()) {
             return db.inTransaction(tx -> {
                 if (tx.squads().all().stream().anyMatch(s -> same(s.name(), n))) {
-                    return Optional.of("There is already a squad called " + n + " in this file.");
+                    return Optional.of(tr("organise.squadTaken", n));
                 }
                 tx.squads().insert(n);
                 return Optional.<String>empty();
@@ -56,10 +58,10 @@ final class Organising {
      */
     static Optional<String> moveToSquad(RecordSource file, long personId, Squad squad, LocalDate from) {
         if (squad == null) {
-            return Optional.of("Choose the squad the person moves to.");
+            return Optional.of(tr("organise.chooseSquad"));
         }
         if (from == null) {
-            return Optional.of("Choose the day the person joins " + squad.name() + ".");
+            return Optional.of(tr("organise.chooseDay", squad.name()));
         }
         try (Database db = file.open()) {
             return db.inTransaction(tx -> {
@@ -67,11 +69,10 @@ final class Organising {
                         .filter(m -> m.leftOn() == null || !m.leftOn().isBefore(from)).toList();
                 for (Membership m : open) { // every refusal before anything is written
                     if (!m.joinedOn().isBefore(from)) {
-                        return Optional.of("A membership starting on " + m.joinedOn() + " is already recorded; choose"
-                                + " a day after it.");
+                        return Optional.of(tr("organise.afterStart", m.joinedOn()));
                     }
                     if (m.squadId() == squad.id() && m.leftOn() == null) {
-                        return Optional.of("The person is already in " + squad.name() + ".");
+                        return Optional.of(tr("organise.already", squad.name()));
                     }
                 }
                 for (Membership m : open) {
@@ -89,19 +90,18 @@ final class Organising {
      */
     static Optional<String> leave(RecordSource file, long personId, LocalDate lastDay) {
         if (lastDay == null) {
-            return Optional.of("Choose the last day in the squad.");
+            return Optional.of(tr("organise.chooseLast"));
         }
         try (Database db = file.open()) {
             return db.inTransaction(tx -> {
                 java.util.List<Membership> open = tx.squads().membershipsOf(personId).stream()
                         .filter(m -> m.leftOn() == null || m.leftOn().isAfter(lastDay)).toList();
                 if (open.isEmpty()) {
-                    return Optional.of("The person is in no squad on " + lastDay + ".");
+                    return Optional.of(tr("organise.noSquadOn", lastDay));
                 }
                 for (Membership m : open) {
                     if (lastDay.isBefore(m.joinedOn())) {
-                        return Optional.of("A membership starting on " + m.joinedOn() + " is recorded; the last day"
-                                + " cannot be before it.");
+                        return Optional.of(tr("organise.lastBeforeStart", m.joinedOn()));
                     }
                 }
                 for (Membership m : open) {

@@ -51,10 +51,9 @@ final class PersonPageView {
         pane.undo.setDisable(true);
         pane.editPerson.setOnAction(e -> ctx.vm.selectedHistory().ifPresent(h -> ctx.personForm(h.person())));
         pane.moveSquad.setOnAction(e -> ctx.vm.selectedHistory().ifPresent(h -> moveToSquad(h.person())));
-        pane.previewLetter.setOnAction(e -> previewLetter(new LetterSettings(
-                "Saltmarsh Bay Sports Academy", // not words: the sample academy's name
-                tr("preview.role"), "", tr("preview.contact"), LocalDate.now().minusYears(1),
-                LocalDate.now(), false)));
+        // the preview uses the letter settings last chosen for a squad's letters, over the past year
+        pane.previewLetter.setOnAction(e -> previewLetter(LettersDialog.remembered(LocalDate.now().minusYears(1),
+                LocalDate.now())));
     }
 
     PersonPane pane() {

@@ -36,8 +36,7 @@ public final class SomatotypeSpaceView extends StackPane {
     public SomatotypeSpaceView() {
         setId("space-view");
         if (!Platform.isSupported(ConditionalFeature.SCENE3D)) {
-            Label l = new Label("The 3D view needs graphics hardware support, which this computer's display does not"
-                    + " offer. The somatochart shows the same ratings in two dimensions.");
+            Label l = new Label(org.shapetrail.i18n.Messages.tr("space.noHardware"));
             l.setId("space-unavailable");
             l.setWrapText(true);
             getChildren().add(l);
@@ -87,8 +86,9 @@ public final class SomatotypeSpaceView extends StackPane {
         world.getChildren().add(axis(new Point3D(8, 0, 0), Color.web("#a3472f")));
         world.getChildren().add(axis(new Point3D(0, 8, 0), Color.web("#1f6f78")));
         world.getChildren().add(axis(new Point3D(0, 0, 8), Color.web("#3f5fa8")));
-        world.getChildren().addAll(label("endomorphy", Rating.of(8.6, 0, 0)), label("mesomorphy", Rating.of(0, 8.6, 0)),
-                label("ectomorphy", Rating.of(0, 0, 8.6)));
+        world.getChildren().addAll(label(org.shapetrail.i18n.Messages.tr("space.endomorphy"), Rating.of(8.6, 0, 0)),
+                label(org.shapetrail.i18n.Messages.tr("space.mesomorphy"), Rating.of(0, 8.6, 0)),
+                label(org.shapetrail.i18n.Messages.tr("space.ectomorphy"), Rating.of(0, 0, 8.6)));
         world.getChildren().addAll(plane());
         Point3D prev = null;
         for (int i = 0; i < ratings.size(); i++) {

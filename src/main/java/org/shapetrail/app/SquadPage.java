@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
@@ -42,19 +44,17 @@ public record SquadPage(String summary, List<PersonRow> members, List<String> bl
         }
         String summary;
         if (latest.isEmpty()) {
-            summary = members.size() + " current member(s); none has a rated visit yet.";
+            summary = tr("squad.none", members.size());
         } else {
             RatingSummary s = RatingSummary.of(latest);
             chart.groupMean(squad.name(), s, Palette.ACCENT);
-            summary = members.size() + " current members, " + s.n() + " rated. Mean somatotype "
-                    + s.meanRating().toDisplayString(locale) + "; SAM " + Numbers.fmt(locale, s.sam(), 2)
-                    + " (mean distance of each member's latest rating from the mean); SDI "
-                    + Numbers.fmt(locale, s.sdi(), 2) + ".";
+            summary = tr("squad.summary", members.size(), s.n(), s.meanRating().toDisplayString(locale),
+                    Numbers.fmt(locale, s.sam(), 2), Numbers.fmt(locale, s.sdi(), 2));
         }
         List<String> blocks = new ArrayList<>();
         for (TrainingBlock b : a.blocks()) {
             if (b.squadId() == squad.id()) {
-                blocks.add(b.name() + ": " + b.startsOn() + " to " + b.endsOn());
+                blocks.add(tr("squad.block", b.name(), b.startsOn(), b.endsOn()));
             }
         }
         return new SquadPage(summary, members, blocks, chart.buildAroundData(10), h -> chart.buildAroundData(10, h));

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.time.LocalDate;
 import java.util.List;
 import java.util.Optional;
@@ -44,14 +46,14 @@ final class SquadPageView {
         chart.setId("squad-chart");
         chart.setMinSize(300, 300);
         chart.setOnSelect(id -> ctx.showPerson(Long.parseLong(id.substring("person:".length()))));
-        Button letters = new Button("Write letters for this squad…");
+        Button letters = new Button(tr("squad.letters"));
         letters.setId("write-letters");
         letters.setOnAction(e -> writeLetters());
-        Button newSquad = new Button("New squad…");
+        Button newSquad = new Button(tr("squad.new"));
         newSquad.setId("new-squad");
-        newSquad.setOnAction(e -> ctx.askAndOrganise("New squad", "Name of the squad (e.g. Under-15 girls)",
+        newSquad.setOnAction(e -> ctx.askAndOrganise(tr("squad.new.title"), tr("squad.new.prompt"),
                 Organising::addSquad));
-        VBox head = new VBox(6, new HBox(8, squadChoice, letters, newSquad), summary, new Label("Training blocks"),
+        VBox head = new VBox(6, new HBox(8, squadChoice, letters, newSquad), summary, new Label(tr("squad.blocks")),
                 blocks);
         head.setPadding(new Insets(10, 12, 8, 12));
         root.setTop(head);
@@ -99,7 +101,7 @@ final class SquadPageView {
             SquadPage page = SquadPage.of(ctx.loaded(), s, LocalDate.now(), ctx.locale);
             summary.setText(page.summary());
             memberRows.setAll(page.members());
-            blocks.getChildren().setAll(page.blocks().isEmpty() ? List.of(new Label("none"))
+            blocks.getChildren().setAll(page.blocks().isEmpty() ? List.of(new Label(tr("squad.blocks.none")))
                     : page.blocks().stream().map(Label::new).toList());
             chart.setLayout(page.chartAt());
         });
@@ -111,13 +113,13 @@ final class SquadPageView {
         if (l == null || squad.isEmpty()) {
             return;
         }
-        Optional<LetterSettings> settings = LettersDialog.ask(ctx.window(), "Letters — " + squad.get().name(),
+        Optional<LetterSettings> settings = LettersDialog.ask(ctx.window(), tr("squad.letters.title", squad.get().name()),
                 ctx.locale);
         if (settings.isEmpty()) {
             return;
         }
         DirectoryChooser dc = new DirectoryChooser();
-        dc.setTitle("Folder for the letters");
+        dc.setTitle(tr("squad.letters.folder"));
         var folder = dc.showDialog(ctx.window());
         if (folder == null) {
             return;
@@ -131,19 +133,19 @@ final class SquadPageView {
         List<java.nio.file.Path> there = org.shapetrail.OutputFiles.existing(targets);
         if (!there.isEmpty()) {
             javafx.scene.control.Alert ask = new javafx.scene.control.Alert(
-                    javafx.scene.control.Alert.AlertType.CONFIRMATION, there.size() + " of these letters are in "
-                    + folder + " already (e.g. " + there.get(0).getFileName() + "). Replace them?",
+                    javafx.scene.control.Alert.AlertType.CONFIRMATION, tr("squad.letters.there", there.size(), folder,
+                    there.get(0).getFileName()),
                     javafx.scene.control.ButtonType.CANCEL, javafx.scene.control.ButtonType.OK);
-            ask.setHeaderText("Replace existing letters");
+            ask.setHeaderText(tr("squad.letters.replace"));
             ask.initOwner(ctx.window());
             if (ask.showAndWait().orElse(javafx.scene.control.ButtonType.CANCEL) != javafx.scene.control.ButtonType.OK) {
                 return;
             }
         }
-        ctx.vm.runner().run("Writing letters", progress -> LetterBatch.write(composer, people, folder.toPath(), true,
-                "confirm", (done, total) -> progress.update(done, total, "Letter " + done + " of " + total),
+        ctx.vm.runner().run(tr("squad.letters.writing"), progress -> LetterBatch.write(composer, people, folder.toPath(), true,
+                "confirm", (done, total) -> progress.update(done, total, tr("squad.letters.one", done, total)),
                 progress::isCancelled), result -> {
-                    ctx.vm.statusProperty().set("Wrote " + result.letters().size() + " letter(s) to " + folder);
+                    ctx.vm.statusProperty().set(tr("squad.letters.wrote", result.letters().size(), folder));
                     ctx.vm.errorProperty().set(String.join(" ", result.refused()));
                 }, t -> ctx.vm.errorProperty().set(Errors.describe(t)));
     }

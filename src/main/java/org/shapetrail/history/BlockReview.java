@@ -59,8 +59,7 @@ public record BlockReview(TrainingBlock block, int windowDays, List<Athlete> ath
                 before = h.rated().stream().filter(r -> r.visit().id() == pick.beforeVisitId()).findFirst();
                 after = h.rated().stream().filter(r -> r.visit().id() == pick.afterVisitId()).findFirst();
                 if (before.isEmpty() || after.isEmpty()) {
-                    missing.add(new Missing(p, "a visit chosen for the block has no rating (a Heath-Carter site is"
-                            + " missing); choose another"));
+                    missing.add(new Missing(p, org.shapetrail.i18n.Messages.tr("block.pickUnrated")));
                     continue;
                 }
             } else {
@@ -68,13 +67,13 @@ public record BlockReview(TrainingBlock block, int windowDays, List<Athlete> ath
                 after = defaultAfter(h.rated(), block, windowDays);
             }
             if (before.isEmpty() && after.isEmpty()) {
-                missing.add(new Missing(p, "no rated visit in the " + windowDays + " days up to the start or from the end"));
+                missing.add(new Missing(p, org.shapetrail.i18n.Messages.tr("block.noneEither", windowDays)));
             } else if (before.isEmpty()) {
-                missing.add(new Missing(p, "no rated visit in the " + windowDays + " days up to the start ("
-                        + block.startsOn() + ")"));
+                missing.add(new Missing(p, org.shapetrail.i18n.Messages.tr("block.noneBefore", windowDays,
+                        block.startsOn())));
             } else if (after.isEmpty()) {
-                missing.add(new Missing(p, "no rated visit in the " + windowDays + " days from the end ("
-                        + block.endsOn() + ")"));
+                missing.add(new Missing(p, org.shapetrail.i18n.Messages.tr("block.noneAfter", windowDays,
+                        block.endsOn())));
             } else {
                 athletes.add(new Athlete(p, before.get(), after.get(), b.verdict(before.get(), after.get())));
             }

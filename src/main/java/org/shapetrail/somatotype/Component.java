@@ -21,6 +21,11 @@ public enum Component {
         return label;
     }
 
+    /** The component's name in the reader's language ("endomorfia"). */
+    public String shown() {
+        return org.shapetrail.i18n.Messages.tr("space." + label);
+    }
+
     /** "endomorph", as used for the dominant component of a category name. */
     public String noun() {
         return noun;
