@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import javafx.geometry.Insets;
 import javafx.scene.Scene;
 import javafx.scene.control.Button;
@@ -21,11 +23,11 @@ final class ImportWizardView {
 
     ImportWizardView(ImportWizardViewModel vm, TaskRunner runner, Window owner, Runnable afterImport) {
         stage.initOwner(owner);
-        stage.setTitle("Bring in a spreadsheet");
+        stage.setTitle(tr("import.title"));
         GridPane cols = new GridPane();
         cols.setHgap(8);
         cols.setVgap(4);
-        cols.addRow(0, new Label("Column in the file"), new Label("Shapetrail reads it as"));
+        cols.addRow(0, new Label(tr("import.col.file")), new Label(tr("import.col.reads")));
         for (int i = 0; i < vm.headers().size(); i++) {
             ComboBox<ImportWizardViewModel.Choice> c = new ComboBox<>();
             c.getItems().setAll(ImportWizardViewModel.CHOICES);
@@ -33,18 +35,18 @@ final class ImportWizardView {
             c.setId("map-" + i);
             cols.addRow(i + 1, new Label(vm.headers().get(i)), c);
         }
-        CheckBox create = new CheckBox("Add people and measurers who are not in the file yet");
+        CheckBox create = new CheckBox(tr("import.create"));
         create.selectedProperty().bindBidirectional(vm.createMissingProperty());
-        CheckBox month = new CheckBox("Dates are month first (03/04/2024 is 4 March)");
+        CheckBox month = new CheckBox(tr("import.monthFirst"));
         month.selectedProperty().bindBidirectional(vm.monthFirstProperty());
-        CheckBox comma = new CheckBox("Numbers use a decimal comma");
+        CheckBox comma = new CheckBox(tr("import.comma"));
         comma.setSelected(vm.decimalsProperty().get() == DecimalStyle.COMMA);
         comma.selectedProperty().addListener((o, a, b) -> vm.decimalsProperty().set(b ? DecimalStyle.COMMA
                 : DecimalStyle.POINT));
-        Button check = new Button("Check the file (nothing is written)");
+        Button check = new Button(tr("import.check"));
         check.setId("import-check");
         check.setOnAction(e -> vm.dryRun(runner));
-        Button go = new Button("Import");
+        Button go = new Button(tr("import.go"));
         go.setId("import-commit");
         go.disableProperty().bind(vm.canCommitProperty().not());
         go.setOnAction(e -> vm.commit(runner, afterImport));
@@ -55,9 +57,9 @@ final class ImportWizardView {
         ListView<String> report = new ListView<>(vm.report());
         report.setId("import-report");
         report.setPrefHeight(220);
-        VBox box = new VBox(10, new Label("1. What each column holds (suggested from its header; change any)"),
-                new ScrollPane(cols), new Label("2. Options"), create, month, comma,
-                new Label("3. Check, then import: the import is written whole or not at all"),
+        VBox box = new VBox(10, new Label(tr("import.step1")),
+                new ScrollPane(cols), new Label(tr("import.step2")), create, month, comma,
+                new Label(tr("import.step3")),
                 new HBox(8, check, go), summary, report);
         box.setPadding(new Insets(12));
         Scene scene = new Scene(box, 760, 780);

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.nio.file.Path;
 import org.shapetrail.store.RecordSource;
 import java.util.ArrayList;
@@ -31,10 +33,18 @@ import org.shapetrail.store.Database;
  */
 public final class ImportWizardViewModel {
     /** What a column can be set to, in words, and the column it makes. */
-    public record Choice(String words, Column.Role role, Site site, int trial) {
+    public record Choice(Column.Role role, Site site, int trial) {
+        /** The choice in the reader's language. */
+        public String words() {
+            if (role != Column.Role.SITE_VALUE) {
+                return tr("import.role." + role.name());
+            }
+            return trial == 0 ? tr("import.final", site.shown()) : tr("import.trial", site.shown(), trial);
+        }
+
         @Override
         public String toString() {
-            return words;
+            return words();
         }
 
         Column column(String header) {
@@ -76,23 +86,14 @@ public final class ImportWizardViewModel {
 
     private static List<Choice> choices() {
         List<Choice> c = new ArrayList<>();
-        c.add(new Choice("leave out", Column.Role.IGNORED, null, 0));
-        c.add(new Choice("person id", Column.Role.PERSON_ID, null, 0));
-        c.add(new Choice("name", Column.Role.NAME, null, 0));
-        c.add(new Choice("date of birth", Column.Role.BIRTH_DATE, null, 0));
-        c.add(new Choice("sex", Column.Role.SEX, null, 0));
-        c.add(new Choice("visit date", Column.Role.DATE, null, 0));
-        c.add(new Choice("visit time", Column.Role.TIME, null, 0));
-        c.add(new Choice("measurer", Column.Role.MEASURER, null, 0));
-        c.add(new Choice("context", Column.Role.CONTEXT, null, 0));
-        c.add(new Choice("site name (a row per trial)", Column.Role.SITE_NAME, null, 0));
-        c.add(new Choice("trial number (a row per trial)", Column.Role.TRIAL_NUMBER, null, 0));
-        c.add(new Choice("value (a row per trial)", Column.Role.VALUE, null, 0));
-        c.add(new Choice("unit (a row per trial)", Column.Role.UNIT, null, 0));
+        for (Column.Role r : new Column.Role[] {Column.Role.IGNORED, Column.Role.PERSON_ID, Column.Role.NAME,
+            Column.Role.BIRTH_DATE, Column.Role.SEX, Column.Role.LETTER_LANGUAGE, Column.Role.DATE, Column.Role.TIME, Column.Role.MEASURER,
+            Column.Role.CONTEXT, Column.Role.SITE_NAME, Column.Role.TRIAL_NUMBER, Column.Role.VALUE, Column.Role.UNIT}) {
+            c.add(new Choice(r, null, 0));
+        }
         for (Site s : Site.values()) {
-            c.add(new Choice(s.label() + ", final value", Column.Role.SITE_VALUE, s, 0));
-            for (int t = 1; t <= 3; t++) {
-                c.add(new Choice(s.label() + ", trial " + t, Column.Role.SITE_VALUE, s, t));
+            for (int t = 0; t <= 3; t++) {
+                c.add(new Choice(Column.Role.SITE_VALUE, s, t));
             }
         }
         return List.copyOf(c);
@@ -106,7 +107,7 @@ public final class ImportWizardViewModel {
     private void invalidate() {
         plan.set(null);
         canCommit.set(false);
-        summary.set("Settings changed: run the check again.");
+        summary.set(tr("import.changed"));
         report.clear();
     }
 
@@ -114,8 +115,8 @@ public final class ImportWizardViewModel {
     public void dryRun(TaskRunner runner) {
         List<Column> cols = currentColumns();
         ImportOptions o = new ImportOptions(decimals.get(), monthFirst.get(), createMissing.get());
-        summary.set("Checking " + file.getFileName() + " …");
-        runner.run("Checking the file", () -> {
+        summary.set(tr("import.checking", file.getFileName()));
+        runner.run(tr("import.checking.task"), () -> {
             try (Database db = database.open()) {
                 return Importer.dryRun(file, Academy.load(db), o, cols);
             }
@@ -129,13 +130,13 @@ public final class ImportWizardViewModel {
             return;
         }
         canCommit.set(false);
-        summary.set("Importing …");
-        runner.run("Importing", () -> {
+        summary.set(tr("import.importing"));
+        runner.run(tr("import.importing.task"), () -> {
             try (Database db = database.open()) {
                 return Importer.commit(db, p);
             }
         }, n -> {
-            summary.set("Imported " + n + " visit(s).");
+            summary.set(tr("import.done", n));
             done.run();
         }, t -> summary.set(Errors.describe(t)));
     }
@@ -166,7 +167,7 @@ public final class ImportWizardViewModel {
             lines.add(f.describe());
         }
         if (lines.isEmpty() && p.fileProblems().isEmpty()) {
-            lines.add("Every row can be imported.");
+            lines.add(tr("import.allGood"));
         }
         report.setAll(lines);
         canCommit.set(p.canCommit() && !p.visits().isEmpty());

@@ -1,5 +1,7 @@
 package org.shapetrail.app;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.Optional;
 import java.util.prefs.Preferences;
 import javafx.geometry.Insets;
@@ -46,17 +48,16 @@ final class ServerConnectDialog {
     static Optional<RecordSource.Server> ask(Window owner, String address, String why) {
         Dialog<RecordSource.Server> d = new Dialog<>();
         d.initOwner(owner);
-        d.setTitle("Connect to a server");
+        d.setTitle(tr("server.title"));
         d.setHeaderText(why != null ? why
-                : "An academy's shared record on a PostgreSQL server. Ask its administrator for the address and your"
-                        + " account.");
+                : tr("server.header"));
         TextField where = new TextField(address != null ? address : lastAddress());
         where.setId("server-address");
         where.setPromptText("postgresql://ana@academy-server:5432/academy");
         where.setPrefColumnCount(36);
         PasswordField password = new PasswordField();
         password.setId("server-password");
-        password.setPromptText("leave empty to use PGPASSWORD or ~/.pgpass");
+        password.setPromptText(tr("server.password.prompt"));
         Label problem = new Label();
         problem.setId("server-problem");
         problem.setWrapText(true);
@@ -64,18 +65,18 @@ final class ServerConnectDialog {
         problem.getStyleClass().add("form-problem");
         problem.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE); // the whole message, over as many lines as it takes
         where.textProperty().addListener((o, a, b) -> problem.setText("")); // an old complaint goes once the address changes
-        Label note = new Label("The password is used for this session only and never saved.");
+        Label note = new Label(tr("server.note"));
         note.getStyleClass().add("hint");
         GridPane g = new GridPane();
         g.setHgap(8);
         g.setVgap(8);
         g.setPadding(new Insets(12));
-        g.addRow(0, new Label("Server address"), where);
-        g.addRow(1, new Label("Password"), password);
+        g.addRow(0, new Label(tr("server.address")), where);
+        g.addRow(1, new Label(tr("server.password")), password);
         g.add(note, 1, 2);
         g.add(problem, 0, 3, 2, 1);
         d.getDialogPane().setContent(g);
-        ButtonType connect = new ButtonType("Connect", ButtonBar.ButtonData.OK_DONE);
+        ButtonType connect = new ButtonType(tr("server.connect"), ButtonBar.ButtonData.OK_DONE);
         d.getDialogPane().getButtonTypes().addAll(connect, ButtonType.CANCEL);
         if (owner != null && owner.getScene() != null) {
             d.getDialogPane().getStylesheets().addAll(owner.getScene().getStylesheets());

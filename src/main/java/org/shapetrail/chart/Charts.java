@@ -21,9 +21,9 @@ public final class Charts {
         GrowthChartBuilder b = new GrowthChartBuilder(h.person().displayName()).visits(vs);
         var phv = h.growth().observedPhv();
         if (phv.status() == org.shapetrail.growth.ObservedPhv.Status.FOUND) {
-            b.curve(phv.curve()).ageAtPhv(phv.ageAtPeak(), phv.seAgeAtPeak(), "observed PHV");
+            b.curve(phv.curve()).ageAtPhv(phv.ageAtPeak(), phv.seAgeAtPeak(), org.shapetrail.i18n.Messages.tr("chart.phv.observed"));
         } else if (h.growth().maturity() != null) {
-            b.ageAtPhv(h.growth().maturity().ageAtPhv(), h.growth().maturity().seeYears(), "estimated age at PHV");
+            b.ageAtPhv(h.growth().maturity().ageAtPhv(), h.growth().maturity().seeYears(), org.shapetrail.i18n.Messages.tr("chart.phv.estimated"));
         }
         return b.build();
     }

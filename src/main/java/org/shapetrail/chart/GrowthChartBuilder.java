@@ -1,5 +1,7 @@
 package org.shapetrail.chart;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.ArrayList;
 import java.util.List;
 import org.shapetrail.growth.PreeceBaines;
@@ -54,10 +56,10 @@ public final class GrowthChartBuilder {
         java.util.function.DoubleUnaryOperator massY = m -> s0 + (m - m0) / (m1 - m0) * (s1 - s0);
         List<Primitive> all = new ArrayList<>();
         List<Double> xt = Axes.ticks(a0, a1, 8);
-        Axes.frame(all, a0, a1, s0, s1, xt, xt.stream().map(Axes::label).toList(), Axes.ticks(s0, s1, 6), "age (years)",
-                "stature cm (solid) · body mass kg (dashed, right)", (a1 - a0) * 0.06, (s1 - s0) * 0.06);
+        Axes.frame(all, a0, a1, s0, s1, xt, xt.stream().map(Axes::label).toList(), Axes.ticks(s0, s1, 6), tr("chart.growth.x"),
+                tr("chart.growth.y"), (a1 - a0) * 0.06, (s1 - s0) * 0.06);
         for (double m : Axes.ticks(m0, m1, 5)) {
-            all.add(new Primitive.Text(new Point(a1 + (a1 - a0) * 0.01, massY.applyAsDouble(m)), Axes.label(m) + " kg", 8,
+            all.add(new Primitive.Text(new Point(a1 + (a1 - a0) * 0.01, massY.applyAsDouble(m)), tr("chart.kg", Axes.label(m)), 8,
                     Anchor.START, false, Palette.series(1)));
         }
         if (phvAge != null) {
@@ -104,7 +106,8 @@ public final class GrowthChartBuilder {
         }
         for (Point p : st) {
             all.add(new Primitive.Marker(p, MarkerShape.CIRCLE, 6, Style.filled(Palette.series(0), Palette.INK, 0.6), null,
-                    Axes.label(Math.round(p.x() * 10) / 10.0) + " y: " + Axes.label(Math.round(p.y() * 10) / 10.0) + " cm"));
+                    tr("chart.growth.stature", Axes.label(Math.round(p.x() * 10) / 10.0),
+                            Axes.label(Math.round(p.y() * 10) / 10.0))));
         }
         for (Point p : ms) {
             all.add(new Primitive.Marker(p, MarkerShape.SQUARE, 6, Style.filled(Palette.PAPER, Palette.series(1), 1.2), null,

@@ -63,8 +63,10 @@ public final class ProfileChartBuilder {
     public ChartModel build() {
         List<Primitive> all = new ArrayList<>();
         double top = Math.ceil(maxRating);
-        Axes.frame(all, 0.5, 3.5, 0, top, List.of(1.0, 2.0, 3.0), List.of("endo", "meso", "ecto"),
-                Axes.ticks(0, top, 6), "component", "rating", 0.25, 0.55);
+        Axes.frame(all, 0.5, 3.5, 0, top, List.of(1.0, 2.0, 3.0), List.of(org.shapetrail.i18n.Messages.tr("chart.profile.endo"),
+                org.shapetrail.i18n.Messages.tr("chart.profile.meso"), org.shapetrail.i18n.Messages.tr("chart.profile.ecto")),
+                Axes.ticks(0, top, 6), org.shapetrail.i18n.Messages.tr("chart.profile.x"),
+                org.shapetrail.i18n.Messages.tr("chart.profile.y"), 0.25, 0.55);
         all.addAll(lines);
         // wide rather than tall, so the three component names sit apart
         return new ChartModel(title, -0.1, 4.4, -1.3, top + 0.6, 3.2, all);

@@ -1,5 +1,7 @@
 package org.shapetrail.chart;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.time.LocalDate;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
@@ -121,11 +123,11 @@ public final class SomatochartBuilder {
         frame.add(new Primitive.Segment(MESO_CORNER, ENDO_ECTO_MID, false, axis));
         frame.add(new Primitive.Segment(ECTO_CORNER, ENDO_MESO_MID, false, axis));
         // the corner names sit below their corners, clear of the outline
-        frame.add(new Primitive.Text(new Point(ENDO_CORNER.x() - 0.3, ENDO_CORNER.y() - 2.2), "ENDOMORPHY", 10,
+        frame.add(new Primitive.Text(new Point(ENDO_CORNER.x() - 0.3, ENDO_CORNER.y() - 2.2), tr("chart.corner.endo"), 10,
                 Anchor.MIDDLE, true, Palette.MUTED));
-        frame.add(new Primitive.Text(new Point(MESO_CORNER.x(), MESO_CORNER.y() + 0.9), "MESOMORPHY", 10,
+        frame.add(new Primitive.Text(new Point(MESO_CORNER.x(), MESO_CORNER.y() + 0.9), tr("chart.corner.meso"), 10,
                 Anchor.MIDDLE, true, Palette.MUTED));
-        frame.add(new Primitive.Text(new Point(ECTO_CORNER.x() + 0.3, ECTO_CORNER.y() - 2.2), "ECTOMORPHY", 10,
+        frame.add(new Primitive.Text(new Point(ECTO_CORNER.x() + 0.3, ECTO_CORNER.y() - 2.2), tr("chart.corner.ecto"), 10,
                 Anchor.MIDDLE, true, Palette.MUTED));
         for (int v = -6; v <= 6; v += 6) {
             frame.add(new Primitive.Text(new Point(v, -13.0), Integer.toString(v), 8, Anchor.MIDDLE, false,
@@ -183,7 +185,7 @@ public final class SomatochartBuilder {
         }
         sums.forEach((c, acc) -> {
             if (acc[2] >= 48) {
-                frame.add(new Primitive.Text(new Point(acc[0] / acc[2], acc[1] / acc[2]), c.displayName(), 6.5,
+                frame.add(new Primitive.Text(new Point(acc[0] / acc[2], acc[1] / acc[2]), c.shown(), 6.5,
                         Anchor.MIDDLE, false, Palette.FRAME));
             }
         });
@@ -220,7 +222,7 @@ public final class SomatochartBuilder {
      */
     public SomatochartBuilder withAxisNames(String endo, String meso, String ecto) {
         List<String> names = List.of(endo, meso, ecto);
-        List<String> trade = List.of("ENDOMORPHY", "MESOMORPHY", "ECTOMORPHY");
+        List<String> trade = List.of(tr("chart.corner.endo"), tr("chart.corner.meso"), tr("chart.corner.ecto"));
         for (int i = 0; i < frame.size(); i++) {
             if (frame.get(i) instanceof Primitive.Text t && trade.contains(t.text())) {
                 frame.set(i, new Primitive.Text(t.at(), names.get(trade.indexOf(t.text())), t.sizePt(), t.anchor(),
@@ -249,14 +251,14 @@ public final class SomatochartBuilder {
         for (Verdict v : Verdict.values()) {
             all.add(new Primitive.Segment(new Point(x0, y + 3 * unitsPerPt), new Point(x0 + 26 * unitsPerPt / X_SCALE,
                     y + 3 * unitsPerPt), false, stepStyle(v, Palette.INK)));
-            all.add(new Primitive.Text(new Point(x0 + 32 * unitsPerPt / X_SCALE, y), "change " + v.words(), 8, Anchor.START, false, Palette.INK));
+            all.add(new Primitive.Text(new Point(x0 + 32 * unitsPerPt / X_SCALE, y), tr("chart.legend.step", v.shown()), 8, Anchor.START, false, Palette.INK));
             y -= 13 * unitsPerPt;
         }
         if (anyEllipse) {
             all.add(new Primitive.Path(Ellipses.polygon(x0 + 13 * unitsPerPt / X_SCALE, y + 3 * unitsPerPt,
                     new double[][] {{Math.pow(11 * unitsPerPt / X_SCALE, 2), 0}, {0, Math.pow(4.5 * unitsPerPt, 2)}}, 1,
                     24), true, new Style(Palette.NOISE, 0.6, new double[0], Palette.NOISE, 0.35)));
-            all.add(new Primitive.Text(new Point(x0 + 32 * unitsPerPt / X_SCALE, y), "95 % measurement-noise region", 8, Anchor.START, false, Palette.INK));
+            all.add(new Primitive.Text(new Point(x0 + 32 * unitsPerPt / X_SCALE, y), tr("chart.legend.noise"), 8, Anchor.START, false, Palette.INK));
         }
     }
 
@@ -285,7 +287,7 @@ public final class SomatochartBuilder {
         if (verdicts != null && verdicts.size() != Math.max(0, ordered.size() - 1)) {
             throw new IllegalArgumentException("one verdict per step is needed");
         }
-        DateTimeFormatter f = DateTimeFormatter.ofPattern("MMM yyyy", locale);
+        DateTimeFormatter f = DateTimeFormatter.ofPattern("MMM yyyy", locale); // not words: a date pattern
         for (int i = 0; i < ordered.size(); i++) {
             PathPoint p = ordered.get(i);
             Point at = pt(p.rating());
@@ -320,8 +322,8 @@ public final class SomatochartBuilder {
                     Style.dashed(colour, 1.2, 5, 3)));
         }
         over.add(new Primitive.Marker(at, MarkerShape.DIAMOND, 12, Style.filled(colour, Palette.INK, 1.2), null,
-                name + " mean " + s.meanRating().toDisplayString(locale) + "\nSAM " + String.format(Locale.ROOT, "%.2f",
-                        s.sam())));
+                tr("chart.groupMean", name, s.meanRating().toDisplayString(locale), String.format(locale, "%.2f",
+                        s.sam()))));
         reserved.add(new Object[] {at, 12.0});
         wanted.add(new Object[] {at, name, 9.0, colour});
         return this;

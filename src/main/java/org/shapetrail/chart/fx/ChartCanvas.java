@@ -25,6 +25,8 @@ import org.shapetrail.chart.Viewport;
  * double-click resets; hovering a marker shows its tooltip; clicking a marker reports its id.
  */
 public final class ChartCanvas extends Pane {
+    /** The toolkit's own font family. */
+    private static final String FONT = "System"; // not words: a font family
     private final Canvas canvas = new Canvas();
     private final Tooltip tip = new Tooltip();
     private ChartModel model;
@@ -224,7 +226,7 @@ public final class ChartCanvas extends Pane {
 
         @Override
         public void text(double x, double y, String text, double sizePt, Anchor anchor, boolean bold, String colour) {
-            g.setFont(Font.font("System", bold ? FontWeight.BOLD : FontWeight.NORMAL, sizePt * 1.2));
+            g.setFont(Font.font(FONT, bold ? FontWeight.BOLD : FontWeight.NORMAL, sizePt * 1.2));
             g.setFill(web(colour));
             g.setTextAlign(switch (anchor) {
                 case START -> TextAlignment.LEFT;
