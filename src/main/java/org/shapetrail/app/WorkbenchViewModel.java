@@ -87,13 +87,21 @@ public final class WorkbenchViewModel {
         AnalysisSettings s = settings;
         passwordWanted.set(null);
         runner.run(tr("window.opening.task", source.title()), progress -> load(source, s, progress), this::show, t -> {
-            if (source instanceof RecordSource.Server server && t.getMessage() != null
-                    && t.getMessage().contains("password")) {
+            if (source instanceof RecordSource.Server server && passwordRefused(t)) {
                 passwordWanted.set(server); // the window asks for it (and for the address again)
             }
             status.set("");
             error.set(Errors.describe(t));
         });
+    }
+
+    private static boolean passwordRefused(Throwable t) {
+        for (Throwable c = t; c != null; c = c.getCause()) {
+            if (c instanceof org.shapetrail.store.PasswordRefusedException) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /**

@@ -29,9 +29,7 @@ public final class Accounts {
 
     static String checkedName(String name) {
         if (name == null || !NAME.matcher(name).matches()) {
-            throw new StoreException("The account name \"" + name + "\" cannot be used: write it in lower case, starting"
-                    + " with a letter, with letters, digits, '_', '.' or '-' only (at most 63), e.g. ana.ruiz."
-                    + " Nothing was changed.");
+            throw new StoreException(org.shapetrail.i18n.Messages.tr("account.badName", name));
         }
         return name;
     }
@@ -40,12 +38,10 @@ public final class Accounts {
     public void add(String name, StaffRole role, char[] password) throws SQLException {
         checkedName(name);
         if (password == null || password.length < 8) {
-            throw new StoreException("The password for " + name + " is too short: use at least 8 characters."
-                    + " Nothing was changed.");
+            throw new StoreException(org.shapetrail.i18n.Messages.tr("account.shortPassword", name));
         }
         if (exists(name)) {
-            throw new StoreException("There is already an account " + name + " on this server; change its role"
-                    + " (account role) or choose another name. Nothing was changed.");
+            throw new StoreException(org.shapetrail.i18n.Messages.tr("account.taken", name));
         }
         execute("SELECT format('CREATE ROLE %I LOGIN PASSWORD %L IN ROLE %I', ?, ?, ?)", name, new String(password),
                 role.serverRole());
@@ -97,8 +93,7 @@ public final class Accounts {
     private void requireExisting(String name) throws SQLException {
         checkedName(name);
         if (!exists(name)) {
-            throw new StoreException("There is no account " + name + " on this server (account list shows them)."
-                    + " Nothing was changed.");
+            throw new StoreException(org.shapetrail.i18n.Messages.tr("account.none", name));
         }
     }
 

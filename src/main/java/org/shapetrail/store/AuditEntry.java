@@ -24,9 +24,11 @@ public record AuditEntry(long id, String at, String who, String action, String e
     public String what() {
         Map<String, String> v = newValues.isEmpty() ? oldValues : newValues;
         return switch (entity) {
-            case "trial" -> "trials of visit " + visitId;
-            case "rating" -> "rating of visit " + v.get("visit_id");
-            case "person" -> action.equals("erasure") ? "a person (erased; nothing of them kept)" : "person " + v.get("id");
+            case "trial" -> org.shapetrail.i18n.Messages.tr("trail.trials", String.valueOf(visitId));
+            case "rating" -> org.shapetrail.i18n.Messages.tr("trail.rating", v.get("visit_id"));
+            case "person" -> action.equals("erasure") ? org.shapetrail.i18n.Messages.tr("trail.erased")
+                    : org.shapetrail.i18n.Messages.tr("trail.person", v.get("id"));
+            case "visit" -> org.shapetrail.i18n.Messages.tr("trail.visit", v.get("id"));
             default -> entity + " " + v.get("id");
         };
     }
@@ -66,7 +68,7 @@ public record AuditEntry(long id, String at, String who, String action, String e
     /** The lines as a person reads them: one per change, its values indented below. */
     public static String asText(List<AuditEntry> lines) {
         if (lines.isEmpty()) {
-            return "Nothing recorded.\n";
+            return org.shapetrail.i18n.Messages.tr("trail.nothing") + "\n";
         }
         StringBuilder sb = new StringBuilder();
         for (AuditEntry e : lines) {

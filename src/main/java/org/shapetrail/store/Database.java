@@ -1,5 +1,7 @@
 package org.shapetrail.store;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -28,8 +30,9 @@ public final class Database implements AutoCloseable {
     public static final int BUSY_TIMEOUT_MS = 5000;
 
     /** A change refused for a missing or still-used reference, in the same words on both engines. */
-    private static final String FOREIGN_KEY = "That change would leave a reference to a record that does not exist"
-            + " (or remove one that others still refer to); nothing was changed.";
+    private static String foreignKey() {
+        return tr("store.foreignKey");
+    }
 
     /** The oldest PostgreSQL release Shapetrail is tested on or expects to work with. */
     public static final int OLDEST_SERVER = 13;
@@ -92,23 +95,18 @@ public final class Database implements AutoCloseable {
             c = java.sql.DriverManager.getConnection(address.jdbcUrl(), props);
             int major = c.getMetaData().getDatabaseMajorVersion();
             if (major < OLDEST_SERVER) {
-                throw new StoreException("The server at " + address.host() + ":" + address.port() + " runs PostgreSQL "
-                        + c.getMetaData().getDatabaseProductVersion() + "; Shapetrail needs PostgreSQL " + OLDEST_SERVER
-                        + " or later. Ask the server's administrator to upgrade it. Nothing was written.");
+                throw new StoreException(tr("store.oldServer", address.host() + ":" + address.port(),
+                        c.getMetaData().getDatabaseProductVersion(), OLDEST_SERVER));
             }
             int version = Migrations.currentVersion(c);
             if (version > Migrations.latest()) {
-                throw new StoreException("The record at " + shown + " was written by "
-                        + Migrations.writtenBy(c).orElse("a newer Shapetrail") + " (schema " + version + "); this is "
-                        + AppVersion.named() + ", which reads schemas up to " + Migrations.latest() + ". Install "
-                        + Migrations.writtenBy(c).map(w -> w + " or later").orElse("a newer Shapetrail")
-                        + " on this desk. Nothing was written.");
+                throw new StoreException(tr("store.newerRecord", shown, Migrations.writtenBy(c)
+                        .orElse(tr("store.newerShapetrail")), version, AppVersion.named(), Migrations.latest(),
+                        Migrations.writtenBy(c).map(w -> tr("store.orLater", w)).orElse(tr("store.newerShapetrail"))));
             }
             if (version > 0 && version < Migrations.latest() && !ownsSchema(c)) {
-                throw new StoreException("The record at " + shown + " is at schema " + version + " and this "
-                        + AppVersion.named() + " needs schema " + Migrations.latest() + ". Only the record's owner may bring"
-                        + " it up to date: ask your administrator to connect once with " + AppVersion.named()
-                        + " (after a pg_dump, docs/server.md). Nothing was written.");
+                throw new StoreException(tr("store.olderRecord", shown, version, AppVersion.named(),
+                        Migrations.latest()));
             }
             if (version < Migrations.latest()) {
                 Migrations.migrate(c, version, Migrations.latest());
@@ -139,24 +137,18 @@ public final class Database implements AutoCloseable {
         String state = e.getSQLState() == null ? "" : e.getSQLState();
         String where = a.host() + ":" + a.port();
         if (state.equals("28P01") || state.equals("28000")) {
-            return new StoreException("The server at " + where + " refused the password for " + a.user()
-                    + " (or there is no such user). Check the user name in the address and the password (PGPASSWORD,"
-                    + " ~/.pgpass or the one you typed). Nothing was written.", e);
+            return new PasswordRefusedException(tr("store.passwordRefused", where, a.user()), e);
         }
         if (state.equals("3D000")) {
-            return new StoreException("There is no database \"" + a.database() + "\" on the server at " + where
-                    + ". Check its name in the address, or ask the administrator to create it (docs/server.md)."
-                    + " Nothing was written.", e);
+            return new StoreException(tr("store.noDatabase", a.database(), where), e);
         }
-        if (state.startsWith("08") && e.getMessage() != null && e.getMessage().contains("password")) {
-            return new StoreException("The server at " + where + " asks for a password for " + a.user()
-                    + " and none was given: set PGPASSWORD, add a line to ~/.pgpass, or type it when Shapetrail"
-                    + " asks. Nothing was written.", e);
+        // 08004: the connection rejected, as the driver reports a password wanted and none given (in any language)
+        if (state.equals("08004") || state.startsWith("08") && e.getMessage() != null
+                && e.getMessage().contains("password")) {
+            return new PasswordRefusedException(tr("store.passwordWanted", where, a.user()), e);
         }
         if (state.startsWith("08")) {
-            return new StoreException("Shapetrail could not reach the server at " + where + " ("
-                    + firstLine(e.getMessage()) + "). Check the host and port in the address, that the server is"
-                    + " running and that this desk may connect to it. Nothing was written.", e);
+            return new StoreException(tr("store.unreachable", where, firstLine(e.getMessage())), e);
         }
         return inSession(a.toString(), e);
     }
@@ -165,22 +157,19 @@ public final class Database implements AutoCloseable {
     private static StoreException inSession(String record, SQLException e) {
         String state = e.getSQLState() == null ? "" : e.getSQLState();
         if (state.equals("42501")) {
-            return new StoreException("The server refused this: beyond what your account may do ("
-                    + firstLine(e.getMessage()) + "). Nothing was changed.", e);
+            return new StoreException(tr("store.noRight", firstLine(e.getMessage())), e);
         }
         if (state.equals("23503")) {
-            return new StoreException(FOREIGN_KEY, e);
+            return new StoreException(foreignKey(), e);
         }
         if (state.startsWith("23")) {
-            return new StoreException("That change would break a rule of the record (" + firstLine(e.getMessage())
-                    + "); nothing was changed.", e);
+            return new StoreException(tr("store.rule", firstLine(e.getMessage())), e);
         }
-        return new StoreException("The record at " + record + " could not be used: " + firstLine(e.getMessage())
-                + ". Nothing was changed.", e);
+        return new StoreException(tr("store.unusable", record, firstLine(e.getMessage())), e);
     }
 
     private static String firstLine(String s) {
-        return s == null ? "no detail" : s.lines().findFirst().orElse("").strip();
+        return s == null ? tr("store.noDetail") : s.lines().findFirst().orElse("").strip();
     }
 
     /** Work done inside one transaction. */
@@ -202,13 +191,12 @@ public final class Database implements AutoCloseable {
     public static Database openExisting(Path file) {
         Path abs = file.toAbsolutePath();
         if (Files.isDirectory(abs)) {
-            throw new StoreException(abs + " is a folder, not a Shapetrail file; name the .sqlite file inside it.");
+            throw new StoreException(tr("store.folder", abs));
         }
         if (!Files.exists(abs)) {
             Path parent = abs.getParent();
-            throw new StoreException("There is no Shapetrail file at " + abs
-                    + (parent != null && !Files.isDirectory(parent) ? " (the folder " + parent + " does not exist)" : "")
-                    + "; check the path. Nothing was created: to start a new file, use New file… in the app.");
+            throw new StoreException(tr("store.noFile", abs, parent != null && !Files.isDirectory(parent)
+                    ? tr("store.noFolder", parent) : ""));
         }
         return open(abs, BUSY_TIMEOUT_MS);
     }
@@ -221,7 +209,7 @@ public final class Database implements AutoCloseable {
                 Files.createDirectories(abs.getParent());
             }
         } catch (IOException e) {
-            throw new StoreException("Cannot create the folder for " + abs + ": " + e.getMessage(), e);
+            throw new StoreException(tr("store.cannotCreateFolder", abs, e.getMessage()), e);
         }
         boolean existed = Files.exists(abs) && sizeOf(abs) > 0;
         boolean readOnly = existed && (!writable(abs) || FileClaim.heldElsewhere(abs));
@@ -244,9 +232,7 @@ public final class Database implements AutoCloseable {
             }
             Path backup = null;
             if (version < Migrations.latest() && readOnly) {
-                throw new StoreException("The file " + abs + " is read-only and was written by an older Shapetrail"
-                        + " (schema " + version + "); make it writable so it can be upgraded (a copy is kept beside it"
-                        + " first), or open a writable copy. Nothing was changed.");
+                throw new StoreException(tr("store.readOnlyOld", abs, version));
             }
             if (version < Migrations.latest()) {
                 if (existed) {
@@ -282,10 +268,9 @@ public final class Database implements AutoCloseable {
 
     /** Names both versions: the one that wrote the file (when it says) and this one; the file is untouched. */
     static String newerFileMessage(Path file, int schema, String writer) {
-        return "The file " + file + " was written by " + (writer == null ? "a newer Shapetrail" : writer) + " (schema "
-                + schema + "); this is " + AppVersion.named() + ", which reads files up to schema " + Migrations.latest()
-                + ". Open it with " + (writer == null ? "a newer Shapetrail" : writer + " or later")
-                + "; the file was not changed.";
+        return tr("store.newerFile", file, writer == null ? tr("store.newerShapetrail") : writer, schema,
+                AppVersion.named(), Migrations.latest(), writer == null ? tr("store.newerShapetrail")
+                : tr("store.orLater", writer));
     }
 
     /**
@@ -450,8 +435,7 @@ public final class Database implements AutoCloseable {
     /** Staff accounts, on a server only (the server refuses a login that may not create roles). */
     public <T> T accounts(AccountWork<T> work) {
         if (engine == Engine.SQLITE) {
-            throw new StoreException("A file has no accounts: whoever opens it may do everything. Accounts are for a"
-                    + " record on a server (docs/server.md). Nothing was changed.");
+            throw new StoreException(tr("store.fileNoAccounts"));
         }
         return inTransaction(tx -> work.run(new Accounts(tx.connection())));
     }
@@ -459,8 +443,7 @@ public final class Database implements AutoCloseable {
     /** Refuses the file-only operations on a server, saying what serves there instead. */
     private void fileOnly(String what) {
         if (engine != Engine.SQLITE) {
-            throw new StoreException("A record on a server is " + what + " with PostgreSQL's own tools (pg_dump and"
-                    + " pg_restore, docs/server.md), not by Shapetrail, which copies files only. Nothing was written.");
+            throw new StoreException(tr("store.serverCopies", tr("store.what." + what.replace(' ', '_'))));
         }
     }
 
@@ -531,7 +514,7 @@ public final class Database implements AutoCloseable {
         } catch (SQLException e) {
             throw translateHere(e);
         } catch (IOException e) {
-            throw new StoreException("Cannot write the backup " + target + ": " + e.getMessage(), e);
+            throw new StoreException(tr("store.backupUnwritable", target, e.getMessage()), e);
         } finally {
             lock.unlock();
         }
@@ -544,19 +527,19 @@ public final class Database implements AutoCloseable {
     public void restoreFrom(Path source) {
         fileOnly("restored");
         if (!Files.isRegularFile(source)) {
-            throw new StoreException("The backup " + source + " does not exist.");
+            throw new StoreException(tr("store.backupMissing", source));
         }
         String integrity;
         try (Database check = Database.openReadOnlyCheck(source)) {
             check.schemaVersion();
             integrity = check.integrityCheck();
         } catch (StoreException refused) {
-            throw new StoreException("The backup cannot be used — " + refused.getMessage().replaceAll(" Nothing was changed.*$", "") + " Nothing was"
-                    + " restored: " + file + " is as it was. Choose another backup.", refused);
+            // the refusal without its own "nothing was changed": the sentence after says what stayed as it was
+            throw new StoreException(tr("store.backupUnusable", refused.getMessage().replaceAll(" "
+                    + java.util.regex.Pattern.quote(tr("store.nothingChanged")) + ".*$", ""), file), refused);
         }
         if (!integrity.equals("ok")) {
-            throw new StoreException("The backup " + source + " is damaged (" + integrity.lines().findFirst().orElse("")
-                    + "). Nothing was restored: " + file + " is as it was. Choose another backup.");
+            throw new StoreException(tr("store.backupDamaged", source, integrity.lines().findFirst().orElse(""), file));
         }
         lock.lock();
         try (Statement s = connection.createStatement()) {
@@ -582,8 +565,7 @@ public final class Database implements AutoCloseable {
             int v = Migrations.currentVersion(c);
             if (v < 1 || v > Migrations.latest()) {
                 c.close();
-                throw new StoreException("The file " + source + " is not a Shapetrail backup this version can read"
-                        + " (schema " + v + ").");
+                throw new StoreException(tr("store.notBackup", source, v));
             }
             return new Database(source.toAbsolutePath(), c, null);
         } catch (SQLException e) {
@@ -639,7 +621,7 @@ public final class Database implements AutoCloseable {
         }
         Erasure e = inTransaction(tx -> {
             Person p = tx.people().find(personId)
-                    .orElseThrow(() -> new StoreException("There is no person with id " + personId + "."));
+                    .orElseThrow(() -> new StoreException(tr("store.noPerson", String.valueOf(personId))));
             int visits = tx.visits().ofPerson(personId).size();
             tx.people().erase(personId);
             return new Erasure(p, visits, java.util.List.of());
@@ -647,9 +629,7 @@ public final class Database implements AutoCloseable {
         try {
             wipeFreedSpace();
         } catch (StoreException busy) {
-            throw new StoreException(e.person().displayName() + " is erased, but another program has " + name
-                    + " open, so its freed space may still hold traces. Close the other program (or Shapetrail"
-                    + " window), then run: erase-person --wipe-only", busy);
+            throw new StoreException(tr("store.erasedBusy", e.person().displayName(), name), busy);
         }
         return new Erasure(e.person(), e.visits(), knownCopies());
     }
@@ -662,7 +642,7 @@ public final class Database implements AutoCloseable {
     private Erasure eraseOnServer(long personId) {
         Erasure e = inTransaction(tx -> {
             Person p = tx.people().find(personId)
-                    .orElseThrow(() -> new StoreException("There is no person with id " + personId + "."));
+                    .orElseThrow(() -> new StoreException(tr("store.noPerson", String.valueOf(personId))));
             int visits = tx.visits().ofPerson(personId).size();
             try (var ps = tx.connection().prepareStatement("SELECT erase_person(?)")) {
                 ps.setLong(1, personId);
@@ -673,7 +653,7 @@ public final class Database implements AutoCloseable {
         try {
             wipeFreedSpace();
         } catch (StoreException notOwner) {
-            throw new StoreException(e.person().displayName() + " is erased from " + name + ", but " + notOwner.getMessage(),
+            throw new StoreException(tr("store.erasedBut", e.person().displayName(), name, notOwner.getMessage()),
                     notOwner);
         }
         return new Erasure(e.person(), e.visits(), knownCopies());
@@ -692,8 +672,7 @@ public final class Database implements AutoCloseable {
                 // the erased rows' old versions stay in the tables' pages until they are rewritten, which
                 // only the tables' owner may do (the server skips the others with a mere warning)
                 if (!ownsSchema(connection)) {
-                    throw new StoreException("the old copies of the erased rows stay in the server's storage until"
-                            + " the record's owner runs: shapetrail erase-person --wipe-only (docs/server.md).");
+                    throw new StoreException(tr("store.erasedServer"));
                 }
                 for (String table : List.of("trial", "visit_rating", "block_pick", "membership", "visit", "person",
                         "audit_entry")) {
@@ -704,8 +683,7 @@ public final class Database implements AutoCloseable {
             s.execute("VACUUM");
             try (var rs = s.executeQuery("PRAGMA wal_checkpoint(TRUNCATE)")) {
                 if (rs.next() && (rs.getInt(1) != 0 || rs.getInt(2) != 0 && rs.getInt(2) != rs.getInt(3))) {
-                    throw new StoreException("Another program has " + file + " open, so its write-ahead log could"
-                            + " not be emptied; close it and run again.");
+                    throw new StoreException(tr("store.walBusy", file));
                 }
             }
         } catch (SQLException e) {
@@ -718,8 +696,7 @@ public final class Database implements AutoCloseable {
     /** {@code PRAGMA integrity_check}: "ok" for a sound file, otherwise SQLite's description. */
     public String integrityCheck() {
         if (engine == Engine.POSTGRESQL) {
-            throw new StoreException("A server checks its own storage (PostgreSQL's amcheck, run by its administrator);"
-                    + " Shapetrail's integrity check reads files only.");
+            throw new StoreException(tr("store.serverIntegrity"));
         }
         return inTransaction(tx -> {
             try (Statement s = tx.connection().createStatement();
@@ -749,9 +726,7 @@ public final class Database implements AutoCloseable {
         if (engine == Engine.POSTGRESQL) {
             String state = e.getSQLState() == null ? "" : e.getSQLState();
             if (state.startsWith("08") || state.equals("57P01")) {
-                return new StoreException("The connection to the server " + name + " was lost ("
-                        + firstLine(e.getMessage()) + "); nothing of this change was saved. Check the network and"
-                        + " try again.", e);
+                return new StoreException(tr("store.lost", name, firstLine(e.getMessage())), e);
             }
             return inSession(name, e);
         }
@@ -766,28 +741,22 @@ public final class Database implements AutoCloseable {
                 return new FileBusyException(file, e);
             }
             if (code.name().startsWith("SQLITE_CONSTRAINT_FOREIGNKEY")) {
-                return new StoreException(FOREIGN_KEY, e);
+                return new StoreException(foreignKey(), e);
             }
             if (code == SQLiteErrorCode.SQLITE_NOTADB) {
-                return new StoreException("The file " + file + " is not a Shapetrail database (nor any SQLite file);"
-                        + " check that you chose the right file. Nothing was changed.", e);
+                return new StoreException(tr("store.notADb", file), e);
             }
             if (code.name().startsWith("SQLITE_CORRUPT")) {
-                return new StoreException("The file " + file + " is damaged: SQLite finds it malformed (cut short or"
-                        + " overwritten). Nothing was changed; restore it from a backup (the restore command) or use"
-                        + " a copy made before.", e);
+                return new StoreException(tr("store.corrupt", file), e);
             }
             java.util.Optional<String> holder = FileClaim.holder(Path.of(file));
             if (code.name().startsWith("SQLITE_READONLY") && holder.isPresent()) {
-                return new StoreException("The file " + file + " is open for editing in " + holder.get()
-                        + ", so this window has it read-only and nothing was saved. Close the file there, then open"
-                        + " it again here to edit.", e);
+                return new StoreException(tr("store.heldElsewhere", file, holder.get()), e);
             }
             if (code.name().startsWith("SQLITE_READONLY")) {
-                return new StoreException("The file " + file + " is read-only, so nothing was saved; make it writable"
-                        + " (its file permissions) or work on a copy.", e);
+                return new StoreException(tr("store.readOnly", file), e);
             }
         }
-        return new StoreException("The database file " + file + " could not be used: " + e.getMessage(), e);
+        return new StoreException(tr("store.fileUnusable", file, e.getMessage()), e);
     }
 }

@@ -9,13 +9,11 @@ public final class EditConflictException extends StoreException {
     private final RowStamp now;
 
     EditConflictException(RowStamp seen, RowStamp now) {
-        super(now == null
-                ? "This visit was deleted by someone else while you were editing it; nothing was saved. Reload to see"
-                        + " the person's visits as they are now; what you typed is still in the form."
-                : "This visit was changed by " + (now.changedBy().isBlank() ? "someone else" : now.changedBy())
-                        + (now.changedAt().isBlank() ? "" : " at " + now.changedAt().replace('T', ' ').replace("Z", " UTC"))
-                        + " while you were editing it, so your save was refused and nothing was overwritten. Reload to"
-                        + " see their change, then make yours again; what you typed is still in the form.");
+        super(now == null ? org.shapetrail.i18n.Messages.tr("conflict.deleted")
+                : org.shapetrail.i18n.Messages.tr("conflict.changed", now.changedBy().isBlank()
+                        ? org.shapetrail.i18n.Messages.tr("conflict.someone") : now.changedBy(), now.changedAt().isBlank()
+                        ? "" : org.shapetrail.i18n.Messages.tr("conflict.at", now.changedAt().replace('T', ' ')
+                        .replace("Z", " UTC"))));
         this.seen = seen;
         this.now = now;
     }

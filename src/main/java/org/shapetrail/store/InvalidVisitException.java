@@ -9,7 +9,8 @@ public final class InvalidVisitException extends ShapetrailException {
     private final List<Problem> problems;
 
     public InvalidVisitException(List<Problem> problems) {
-        super("The visit was not saved: " + String.join(" ", problems.stream().map(Problem::message).toList()));
+        super(org.shapetrail.i18n.Messages.tr("visit.notSaved", String.join(" ", problems.stream().map(Problem::message)
+                .toList())));
         this.problems = List.copyOf(problems);
     }
 

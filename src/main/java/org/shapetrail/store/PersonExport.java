@@ -20,7 +20,7 @@ public final class PersonExport {
     /** The JSON text of one person's record. */
     public static String toJson(Tx tx, long personId) throws SQLException {
         Person p = tx.people().find(personId)
-                .orElseThrow(() -> new StoreException("There is no person with id " + personId + "."));
+                .orElseThrow(() -> new StoreException(org.shapetrail.i18n.Messages.tr("store.noPerson", String.valueOf(personId))));
         Map<Long, Measurer> measurers = new java.util.HashMap<>();
         for (Measurer m : tx.measurers().all()) {
             measurers.put(m.id(), m);

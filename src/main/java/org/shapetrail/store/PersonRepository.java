@@ -44,7 +44,7 @@ public final class PersonRepository {
             bind(ps, p);
             ps.setLong(12, p.id());
             if (ps.executeUpdate() != 1) {
-                throw new StoreException("There is no person with id " + p.id() + ".");
+                throw new StoreException(org.shapetrail.i18n.Messages.tr("store.noPerson", String.valueOf(p.id())));
             }
         }
     }

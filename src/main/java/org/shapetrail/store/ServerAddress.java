@@ -38,11 +38,11 @@ public record ServerAddress(String host, int port, String database, String user,
     public static ServerAddress parse(String target) {
         String t = target.strip();
         if (!isServer(t)) {
-            throw new StoreException(wrong(target, "it does not start with postgresql://"));
+            throw new StoreException(wrong(target, org.shapetrail.i18n.Messages.tr("address.scheme")));
         }
         String rest = t.substring(t.indexOf("://") + 3);
         if (rest.isBlank() || rest.startsWith("/")) {
-            throw new StoreException(wrong(target, "it names no server (host)"));
+            throw new StoreException(wrong(target, org.shapetrail.i18n.Messages.tr("address.noHost")));
         }
         URI u;
         try {
@@ -51,12 +51,10 @@ public record ServerAddress(String host, int port, String database, String user,
             throw new StoreException(wrong(target, e.getReason()), e);
         }
         if (u.getHost() == null || u.getHost().isBlank()) {
-            throw new StoreException(wrong(target, "it names no server (host)"));
+            throw new StoreException(wrong(target, org.shapetrail.i18n.Messages.tr("address.noHost")));
         }
         if (u.getRawUserInfo() != null && u.getRawUserInfo().contains(":")) {
-            throw new StoreException("The address " + redact(target) + " holds a password. Leave it out of the address"
-                    + " (postgresql://USER@HOST:PORT/DATABASE): put it in PGPASSWORD or ~/.pgpass, or type it when"
-                    + " Shapetrail asks. Nothing was connected.");
+            throw new StoreException(org.shapetrail.i18n.Messages.tr("address.password", redact(target)));
         }
         Map<String, String> query = new LinkedHashMap<>();
         if (u.getRawQuery() != null) {
@@ -68,8 +66,7 @@ public record ServerAddress(String host, int port, String database, String user,
                 String k = decode(eq < 0 ? pair : pair.substring(0, eq));
                 String v = eq < 0 ? "" : decode(pair.substring(eq + 1));
                 if (k.equals("password")) {
-                    throw new StoreException("The address " + redact(target) + " holds a password. Leave it out:"
-                            + " put it in PGPASSWORD or ~/.pgpass, or type it when Shapetrail asks. Nothing was connected.");
+                    throw new StoreException(org.shapetrail.i18n.Messages.tr("address.password", redact(target)));
                 }
                 query.put(k, v);
             }
@@ -81,7 +78,7 @@ public record ServerAddress(String host, int port, String database, String user,
         query.remove("user");
         String path = u.getPath() == null ? "" : u.getPath().replaceFirst("^/", "");
         if (path.contains("/")) {
-            throw new StoreException(wrong(target, "the database name \"" + path + "\" holds a slash"));
+            throw new StoreException(wrong(target, org.shapetrail.i18n.Messages.tr("address.slash", path)));
         }
         String db = path.isBlank() ? user : path;
         int port = u.getPort() < 0 ? DEFAULT_PORT : u.getPort();
@@ -89,9 +86,7 @@ public record ServerAddress(String host, int port, String database, String user,
     }
 
     private static String wrong(String target, String why) {
-        return "The server address " + redact(target) + " cannot be used: " + why + ". Write it as"
-                + " postgresql://USER@HOST:PORT/DATABASE, for example postgresql://ana@127.0.0.1:5432/academy."
-                + " Nothing was connected.";
+        return org.shapetrail.i18n.Messages.tr("address.wrong", redact(target), why);
     }
 
     /** The address as it may be shown: any password in it replaced. */

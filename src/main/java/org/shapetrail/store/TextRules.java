@@ -12,27 +12,25 @@ import java.util.Optional;
 public final class TextRules {
     /** A kind of text with its limit. */
     public enum Field {
-        PERSON_NAME("the name", 200, false),
-        MEASURER_NAME("the measurer's name", 200, false),
-        SQUAD_NAME("the squad's name", 100, false),
-        CONTEXT("the context", 200, false),
-        NOTES("the notes", 10_000, true),
-        BLOCK_NAME("the block's name", 200, false),
-        BLOCK_AIM("the block's aim", 2_000, true);
+        PERSON_NAME(200, false),
+        MEASURER_NAME(200, false),
+        SQUAD_NAME(100, false),
+        CONTEXT(200, false),
+        NOTES(10_000, true),
+        BLOCK_NAME(200, false),
+        BLOCK_AIM(2_000, true);
 
-        private final String words;
         private final int maxChars;
         private final boolean lineBreaks;
 
-        Field(String words, int maxChars, boolean lineBreaks) {
-            this.words = words;
+        Field(int maxChars, boolean lineBreaks) {
             this.maxChars = maxChars;
             this.lineBreaks = lineBreaks;
         }
 
-        /** E.g. "the context". */
+        /** E.g. "the context", in the reader's language. */
         public String words() {
-            return words;
+            return org.shapetrail.i18n.Messages.tr("text.field." + name());
         }
 
         /** The longest text allowed, in characters (Unicode code points). */
@@ -51,8 +49,7 @@ public final class TextRules {
         }
         int length = text.codePointCount(0, text.length());
         if (length > field.maxChars) {
-            return Optional.of(field.words + " is " + String.format(Locale.ROOT, "%,d", length) + " characters long;"
-                    + " the limit is " + String.format(Locale.ROOT, "%,d", field.maxChars) + ": shorten it");
+            return Optional.of(org.shapetrail.i18n.Messages.tr("text.tooLong", field.words(), length, field.maxChars));
         }
         int at = 0;
         for (int i = 0; i < text.length(); ) {
@@ -60,8 +57,8 @@ public final class TextRules {
             at++;
             boolean allowed = field.lineBreaks && (cp == '\n' || cp == '\r' || cp == '\t');
             if (Character.getType(cp) == Character.CONTROL && !allowed) {
-                return Optional.of(field.words + " holds a control character (U+" + String.format(Locale.ROOT, "%04X", cp)
-                        + ") at character " + at + ": remove it");
+                return Optional.of(org.shapetrail.i18n.Messages.tr("text.control", field.words(),
+                        String.format(Locale.ROOT, "%04X", cp), at));
             }
             i += Character.charCount(cp);
         }
@@ -71,7 +68,8 @@ public final class TextRules {
     /** {@code text} when it can be kept; otherwise a {@link StoreException} with the reason. */
     public static String require(Field field, String text) {
         problem(field, text).ifPresent(why -> {
-            throw new StoreException(Character.toUpperCase(why.charAt(0)) + why.substring(1) + "; nothing was saved.");
+            throw new StoreException(org.shapetrail.i18n.Messages.tr("text.refused", Character.toUpperCase(why.charAt(0))
+                    + why.substring(1)));
         });
         return text;
     }

@@ -45,7 +45,7 @@ public final class TrainingBlockRepository {
             bind(ps, b);
             ps.setLong(6, b.id());
             if (ps.executeUpdate() != 1) {
-                throw new StoreException("There is no training block with id " + b.id() + ".");
+                throw new StoreException(org.shapetrail.i18n.Messages.tr("blockstore.none", String.valueOf(b.id())));
             }
         }
         try (PreparedStatement del = c.prepareStatement("DELETE FROM block_pick WHERE block_id = ?")) {
@@ -106,8 +106,7 @@ public final class TrainingBlockRepository {
             ps.setLong(2, b.id());
             try (ResultSet rs = ps.executeQuery()) {
                 if (rs.next()) {
-                    throw new StoreException("There is already a training block called " + b.name().strip()
-                            + "; give this one another name. Nothing was saved.");
+                    throw new StoreException(org.shapetrail.i18n.Messages.tr("blockstore.taken", b.name().strip()));
                 }
             }
         }
@@ -120,9 +119,8 @@ public final class TrainingBlockRepository {
                 ps.setString(4, b.startsOn().toString());
                 try (ResultSet rs = ps.executeQuery()) {
                     if (rs.next() && rs.getInt(1) == 0) {
-                        throw new StoreException("Person " + e.getKey() + " was not in the block's squad between "
-                                + b.startsOn() + " and " + b.endsOn() + ", so no visits can be chosen for them. Nothing"
-                                + " was saved.");
+                        throw new StoreException(org.shapetrail.i18n.Messages.tr("blockstore.notMember", String.valueOf(e.getKey()),
+                                b.startsOn(), b.endsOn()));
                     }
                 }
             }
@@ -130,13 +128,11 @@ public final class TrainingBlockRepository {
             Optional<Visit> after = new VisitRepository(c).find(e.getValue().afterVisitId());
             if (before.isEmpty() || after.isEmpty() || before.get().personId() != e.getKey()
                     || after.get().personId() != e.getKey()) {
-                throw new StoreException("A chosen before or after visit is not a visit of person " + e.getKey()
-                        + "; choose among their own visits. Nothing was saved.");
+                throw new StoreException(org.shapetrail.i18n.Messages.tr("blockstore.notTheirs", String.valueOf(e.getKey())));
             }
             if (!before.get().measuredAt().isBefore(after.get().measuredAt())) {
-                throw new StoreException("For person " + e.getKey() + " the chosen before visit ("
-                        + before.get().measuredAt().toLocalDate() + ") is not earlier than the after visit ("
-                        + after.get().measuredAt().toLocalDate() + "); swap them. Nothing was saved.");
+                throw new StoreException(org.shapetrail.i18n.Messages.tr("blockstore.order", String.valueOf(e.getKey()),
+                        before.get().measuredAt().toLocalDate(), after.get().measuredAt().toLocalDate()));
             }
         }
     }

@@ -587,13 +587,11 @@ public final class VisitRepository {
             ps.setLong(1, visitId);
             try (ResultSet rs = ps.executeQuery()) {
                 if (rs.next()) {
-                    return new StoreException("The server refused the change: visit " + visitId + " was entered by "
-                            + rs.getString(1) + ", and a measurer may change or delete only the visits they entered."
-                            + " Ask them or an administrator. Nothing was changed.");
+                    return new StoreException(org.shapetrail.i18n.Messages.tr("visit.notYours", String.valueOf(visitId), rs.getString(1)));
                 }
             }
         }
-        return new StoreException("There is no visit with id " + visitId + ".");
+        return new StoreException(org.shapetrail.i18n.Messages.tr("visit.none", String.valueOf(visitId)));
     }
 
     public Optional<Visit> find(long visitId) throws SQLException {
@@ -671,8 +669,8 @@ public final class VisitRepository {
         if (site == null || values.isEmpty()) {
             return;
         }
-        Site s = Site.byCode(site).orElseThrow(() -> new StoreException("Unknown site '" + site
-                + "' in the file; it was written by a newer Shapetrail."));
+        Site s = Site.byCode(site).orElseThrow(() -> new StoreException(org.shapetrail.i18n.Messages.tr(
+                "visit.unknownSite", site)));
         trials.computeIfAbsent(visit, k -> new ArrayList<>()).add(new SiteTrials(s, values));
     }
 

@@ -43,7 +43,8 @@ class ImportWizardViewModelTest {
         boolean[] done = {false};
         vm.commit(new DirectTaskRunner(), () -> done[0] = true);
         assertTrue(done[0]);
-        assertEquals("Imported 1 visit(s).", vm.summaryProperty().get());
+        assertEquals("Imported 1 visit.", // one visit, in the singular (import.done's plural wording)
+                vm.summaryProperty().get());
         try (Database d = Database.open(db)) {
             assertEquals(1, (int) d.inTransaction(tx -> tx.visits().count()));
         }
