@@ -34,9 +34,8 @@ public final class OutputFiles {
     public static void refuseExisting(List<Path> targets, boolean overwrite, String how) {
         List<Path> there = existing(targets);
         if (!overwrite && !there.isEmpty()) {
-            throw new ShapetrailException((there.size() == 1 ? there.get(0) + " already exists" : there.size()
-                    + " of the files already exist, e.g. " + there.get(0)) + "; choose another name or folder, or " + how
-                    + " to replace " + (there.size() == 1 ? "it" : "them") + ". Nothing was written.");
+            throw new ShapetrailException(org.shapetrail.i18n.Messages.tr("output.exists", there.size(),
+                    there.get(0), how));
         }
     }
 

@@ -317,8 +317,8 @@ final class CsvRows implements AutoCloseable {
                 while (true) {
                     if (pos >= len) {
                         if (eof) {
-                            throw new IOException("a quoted cell starting on line " + quoteLine
-                                    + " is not closed; check the quotes");
+                            throw new IOException(org.shapetrail.i18n.Messages.tr("csv.unclosed",
+                                    String.valueOf(quoteLine)));
                         }
                         return -1;
                     }
@@ -345,8 +345,7 @@ final class CsvRows implements AutoCloseable {
                 // only white space may follow, up to the delimiter or the end of the line
                 while (pos < len && buf[pos] != delimiter && buf[pos] != '\n' && buf[pos] != '\r') {
                     if (!Character.isWhitespace((char) (buf[pos] & 0xff))) {
-                        throw new IOException("line " + line + " has text after the closing quote of a cell;"
-                                + " check the quotes");
+                        throw new IOException(org.shapetrail.i18n.Messages.tr("csv.afterQuote", String.valueOf(line)));
                     }
                     pos++;
                 }

@@ -12,18 +12,11 @@ import org.shapetrail.store.Visit;
 public final class ImportPlan {
     /** What happens to one row. */
     public enum Outcome {
-        IMPORTED("imported"),
-        SKIPPED("skipped"),
-        REJECTED("rejected");
+        IMPORTED, SKIPPED, REJECTED;
 
-        private final String words;
-
-        Outcome(String words) {
-            this.words = words;
-        }
-
+        /** "imported", "skipped", "rejected" in the reader's language. */
         public String words() {
-            return words;
+            return org.shapetrail.i18n.Messages.tr("import.outcome." + name());
         }
     }
 
@@ -39,7 +32,7 @@ public final class ImportPlan {
 
         /** "line 7", "lines 5–14" or "lines 3, 8–9": runs of following lines joined. */
         public String where() {
-            StringBuilder sb = new StringBuilder(lines.size() == 1 ? "line " : "lines ");
+            StringBuilder sb = new StringBuilder();
             for (int i = 0; i < lines.size(); ) {
                 int j = i;
                 while (j + 1 < lines.size() && lines.get(j + 1) == lines.get(j) + 1) {
@@ -54,14 +47,14 @@ public final class ImportPlan {
                 }
                 i = j + 1;
             }
-            return sb.toString();
+            return org.shapetrail.i18n.Messages.tr("import.where", lines.size(), sb.toString());
         }
 
         /** E.g. "lines 5–14: rejected — Triceps trial 2 …". */
         public String describe() {
             // a one-line finding need not repeat its line inside the reason
-            String why = lines.size() == 1 && reason.startsWith("line " + lines.get(0) + ": ")
-                    ? reason.substring(("line " + lines.get(0) + ": ").length()) : reason;
+            String own = org.shapetrail.i18n.Messages.tr("reading.line", String.valueOf(lines.get(0)));
+            String why = lines.size() == 1 && reason.startsWith(own) ? reason.substring(own.length()) : reason;
             return where() + ": " + outcome.words() + (why.isEmpty() ? "" : " — " + why);
         }
     }
@@ -157,10 +150,9 @@ public final class ImportPlan {
     /** A short account for a person, e.g. "120 rows: 118 imported, 2 skipped, 0 rejected". */
     public String summary() {
         if (!fileProblems.isEmpty()) {
-            return "The file cannot be imported: " + String.join(" ", fileProblems);
+            return org.shapetrail.i18n.Messages.tr("import.cannot", String.join(" ", fileProblems));
         }
-        return rows.size() + " rows: " + count(Outcome.IMPORTED) + " imported, " + count(Outcome.SKIPPED)
-                + " skipped, " + count(Outcome.REJECTED) + " rejected; " + visits.size() + " visit(s), "
-                + newPeople.size() + " new person(s), " + newMeasurers.size() + " new measurer(s)";
+        return org.shapetrail.i18n.Messages.tr("import.summary", rows.size(), count(Outcome.IMPORTED),
+                count(Outcome.SKIPPED), count(Outcome.REJECTED), visits.size(), newPeople.size(), newMeasurers.size());
     }
 }

@@ -1,5 +1,7 @@
 package org.shapetrail.exchange;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.io.IOException;
 import java.time.LocalDate;
 import java.time.LocalDateTime;
@@ -302,19 +304,19 @@ final class ImportReading {
         boolean who = col(Column.Role.PERSON_ID).isPresent()
                 || (col(Column.Role.NAME).isPresent() && col(Column.Role.BIRTH_DATE).isPresent());
         if (!who) {
-            fileProblems.add("No column says who was measured: map a person id, or a name and a date of birth.");
+            fileProblems.add(tr("reading.noWho"));
         }
         if (col(Column.Role.DATE).isEmpty()) {
-            fileProblems.add("No column holds the visit date.");
+            fileProblems.add(tr("reading.noDate"));
         }
         if (col(Column.Role.MEASURER).isEmpty()) {
-            fileProblems.add("No column names the measurer.");
+            fileProblems.add(tr("reading.noMeasurer"));
         }
         if (longLayout && (col(Column.Role.VALUE).isEmpty())) {
-            fileProblems.add("A site column is mapped, but no value column.");
+            fileProblems.add(tr("reading.noValueColumn"));
         }
         if (!longLayout && siteColumns.length == 0) {
-            fileProblems.add("No column holds a measurement (e.g. \"stature\", \"triceps 1\").");
+            fileProblems.add(tr("reading.noMeasurement"));
         }
         if (!fileProblems.isEmpty()) {
             return ImportPlan.failed(cols, longLayout, fileProblems);
@@ -328,8 +330,7 @@ final class ImportReading {
         while (rec.next()) {
             long line = rec.line();
             if (rec.size() != cols.size()) {
-                ownRow(line, ImportPlan.Outcome.REJECTED, "the row has " + rec.size()
-                        + " cells but the header has " + cols.size() + "; check the delimiter and the quotes");
+                ownRow(line, ImportPlan.Outcome.REJECTED, tr("reading.cells", rec.size(), cols.size()));
                 havePrevious = false;
                 continue;
             }
@@ -358,7 +359,7 @@ final class ImportReading {
             if (head.personId > 0 && head.measurer != null
                     && existingVisits.contains(head.personId + "|" + head.when + "|" + head.measurer.id())) {
                 previousOwn = new ImportPlan.RowReport(line, ImportPlan.Outcome.SKIPPED,
-                        "this visit is already in the file");
+                        tr("reading.already"));
                 ownRow(line, previousOwn.outcome(), previousOwn.reason());
                 continue;
             }
@@ -366,7 +367,7 @@ final class ImportReading {
                 Long earlier = wideKeys.putIfAbsent(key, line);
                 if (earlier != null) {
                     ownRow(line, ImportPlan.Outcome.REJECTED,
-                            "the same visit as line " + earlier + " (person, date, time and measurer)");
+                            tr("reading.sameAs", String.valueOf(earlier)));
                     continue;
                 }
             }
@@ -410,7 +411,7 @@ final class ImportReading {
             }
         }
         if (log.size() == 0) {
-            fileProblems.add("It has a header but no rows.");
+            fileProblems.add(tr("reading.noRows"));
         }
         return new ImportPlan(cols, longLayout, log.resolve(reasons), new PlannedVisits(planned), newPeople, newMeasurers,
                 fileProblems, 0);
@@ -430,7 +431,7 @@ final class ImportReading {
                 problems.add(pr.message());
             }
             if (trials.isEmpty()) {
-                problems.add("no measurement in the row");
+                problems.add(tr("reading.noValues"));
             }
         }
         return new Checked(trials, problems);
@@ -457,8 +458,7 @@ final class ImportReading {
                 }
                 if (vs.size() != t && !gap) {
                     gap = true;
-                    problems.add(site.label() + " trial " + (t + 1) + " is given without trial " + (vs.size() + 1)
-                            + "; number a site's trials 1, 2, 3 in order.");
+                    problems.add(tr("reading.trialGap", site.shown(), t + 1, vs.size() + 1));
                 }
                 vs.add(v);
             }
@@ -479,7 +479,7 @@ final class ImportReading {
         String sexText = cell(rec, Column.Role.SEX).strip();
         String language = cell(rec, Column.Role.LETTER_LANGUAGE).strip().toLowerCase(java.util.Locale.ROOT);
         if (!Person.LETTER_LANGUAGES.contains(language)) {
-            why.add("letter language \"" + language + "\" is not en, es or pt (leave it empty for the academy's own)");
+            why.add(tr("reading.language", language));
             language = "";
         }
         Person known = null;
@@ -490,34 +490,30 @@ final class ImportReading {
             try {
                 byId = peopleById.get(Long.parseLong(idText));
             } catch (NumberFormatException e) {
-                why.add("person id \"" + idText + "\" is not a number");
+                why.add(tr("reading.idNotNumber", idText));
             }
         }
         if (col(Column.Role.NAME).isEmpty()) {
             known = byId;
             if (idGiven && byId == null && why.isEmpty()) {
-                why.add("there is no person with id " + idText + " in the file");
+                why.add(tr("reading.noId", idText));
             } else if (!idGiven) {
-                why.add("the person id is empty");
+                why.add(tr("reading.idEmpty"));
             }
         } else {
-            LocalDate dob = date(dobText, "date of birth", why);
+            LocalDate dob = date(dobText, tr("reading.what.birth"), why);
             if (name.isEmpty()) {
-                why.add("the name is empty");
+                why.add(tr("reading.nameEmpty"));
             }
             TextRules.problem(TextRules.Field.PERSON_NAME, name).ifPresent(why::add);
             if (dob != null && !name.isEmpty() && why.isEmpty()) {
                 String key = foldCached(name) + "|" + dob;
                 Person byName = peopleByKey.get(key);
                 if (idGiven && byId == null && byName != null) {
-                    why.add("person id " + idText + " is not in the file, but the name and date of birth are those of"
-                            + " person " + byName.id() + " (" + byName.displayName() + "); correct the id, or leave it"
-                            + " empty to match by name");
+                    why.add(tr("reading.idNotHere", idText, String.valueOf(byName.id()), byName.displayName()));
                 } else if (byId != null && byName != byId) {
-                    why.add("person id " + idText + " is " + byId.displayName() + " (born " + byId.birthDate()
-                            + "), but the row names " + name + " (born " + dob + ")"
-                            + (byName == null ? "" : ", who is person " + byName.id())
-                            + "; correct the id or the name and date of birth");
+                    why.add(tr("reading.idOther", idText, byId.displayName(), byId.birthDate(), name, dob,
+                            byName == null ? "" : tr("reading.whoIs", String.valueOf(byName.id()))));
                 } else {
                     known = byName;
                 }
@@ -528,11 +524,11 @@ final class ImportReading {
                         newIndex = idx;
                         String earlier = newPeople.get(idx).letterLanguage();
                         if (!language.isEmpty() && !language.equals(earlier)) {
-                            why.add("letter language " + language + " contradicts an earlier row for " + name + " ("
-                                    + (earlier.isEmpty() ? "empty" : earlier) + "); give one language per person");
+                            why.add(tr("reading.languageRows", language, name, earlier.isEmpty()
+                                    ? tr("reading.emptyWord") : earlier));
                         }
                     } else if (!options.createMissing()) {
-                        why.add(name + " (born " + dob + ") is not in the file; allow new people to add them");
+                        why.add(tr("reading.newPerson", name, dob));
                     } else {
                         try {
                             Sex sex = Sex.ofCode(sexText.isEmpty() ? "?" : sexText.substring(0, 1));
@@ -547,7 +543,7 @@ final class ImportReading {
                             newIndex = newPeople.size() - 1;
                             newPeopleIndex.put(key, newIndex);
                         } catch (IllegalArgumentException e) {
-                            why.add("a new person needs sex F or M, not \"" + sexText + "\"");
+                            why.add(tr("reading.newSex", sexText));
                         }
                     }
                 }
@@ -557,22 +553,19 @@ final class ImportReading {
             personId = known.id();
             birth = known.birthDate();
             if (!language.isEmpty() && !language.equals(known.letterLanguage())) {
-                why.add("letter language " + language + " contradicts the file, where " + known.displayName()
-                        + "'s letters are in " + (known.letterLanguage().isEmpty() ? "the academy's language"
-                        : known.letterLanguage()) + "; correct the row, or the person (Edit person…)");
+                why.add(tr("reading.languageFile", language, known.displayName(), known.letterLanguage().isEmpty()
+                        ? tr("reading.academyLanguage") : known.letterLanguage()));
             }
             if (!sexText.isEmpty()) {
                 Optional<Sex> sex = sexOf(sexText);
                 if (sex.isEmpty()) {
-                    why.add("sex \"" + sexText + "\" is not F or M (leave it empty to keep " + known.displayName()
-                            + "'s)");
+                    why.add(tr("reading.sexWord", sexText, known.displayName()));
                 } else if (sex.get() != known.sex()) {
-                    why.add("sex " + sex.get().code() + " contradicts the file, where " + known.displayName() + " is "
-                            + known.sex().code() + "; correct the row, or the person (Edit person…)");
+                    why.add(tr("reading.sexFile", sex.get().code(), known.displayName(), known.sex().code()));
                 }
             }
         }
-        LocalDate day = date(cell(rec, Column.Role.DATE), "visit date", why);
+        LocalDate day = date(cell(rec, Column.Role.DATE), tr("reading.what.visit"), why);
         LocalTime time = LocalTime.of(9, 0);
         String timeText = cell(rec, Column.Role.TIME).strip();
         if (!timeText.isEmpty()) {
@@ -584,7 +577,7 @@ final class ImportReading {
                     time = LocalTime.parse(timeText);
                     timesByText.put(timeText, time);
                 } catch (DateTimeParseException e) {
-                    why.add("time \"" + timeText + "\" is not hh:mm");
+                    why.add(tr("reading.time", timeText));
                 }
             }
         }
@@ -597,10 +590,10 @@ final class ImportReading {
         Measurer m = measurersByName.get(foldCached(mName));
         String newM = null;
         if (mName.isEmpty()) {
-            why.add("the measurer is empty");
+            why.add(tr("reading.measurerEmpty"));
         } else if (m == null) {
             if (!options.createMissing()) {
-                why.add("measurer " + mName + " is not in the file; allow new measurers to add them");
+                why.add(tr("reading.newMeasurer", mName));
             } else if (TextRules.problem(TextRules.Field.MEASURER_NAME, mName).isPresent()) {
                 why.add(TextRules.problem(TextRules.Field.MEASURER_NAME, mName).get());
             } else {
@@ -642,8 +635,8 @@ final class ImportReading {
             int siteColumn = index.get(Column.Role.SITE_NAME);
             Optional<Site> site = siteIn(rec, siteColumn);
             if (site.isEmpty()) {
-                p.problem("line " + line + ": \"" + cell(rec, Column.Role.SITE_NAME)
-                        + "\" is not a site Shapetrail knows");
+                p.problem(tr("reading.line", String.valueOf(line)) + tr("reading.unknownSite",
+                        cell(rec, Column.Role.SITE_NAME)));
                 return;
             }
             int trial = 1;
@@ -659,7 +652,7 @@ final class ImportReading {
                     trial = 0;
                 }
                 if (trial < 1 || trial > 3) {
-                    p.problem("line " + line + ": trial \"" + tt + "\" must be 1, 2 or 3");
+                    p.problem(tr("reading.line", String.valueOf(line)) + tr("reading.trialNumber", tt));
                     return;
                 }
             }
@@ -668,7 +661,7 @@ final class ImportReading {
             if (!ut.isEmpty()) {
                 unit = InputUnit.parse(ut).filter(u -> u.fits(site.get())).orElse(null);
                 if (unit == null) {
-                    p.problem("line " + line + ": unit \"" + ut + "\" does not fit " + site.get().label());
+                    p.problem(tr("reading.line", String.valueOf(line)) + tr("reading.unit", ut, site.get().shown()));
                     return;
                 }
             }
@@ -705,7 +698,7 @@ final class ImportReading {
         if (Double.isNaN(read)) {
             ValueParser.Parsed v = ValueParser.parse(site, CsvSafety.untext(rec.get(column)), decimals);
             if (!v.ok()) {
-                p.problem((longLayout ? "line " + line + ": " : "") + v.problem().message());
+                p.problem((longLayout ? tr("reading.line", String.valueOf(line)) : "") + v.problem().message());
                 return;
             }
             read = v.value();
@@ -723,8 +716,8 @@ final class ImportReading {
         }
         int at = slot * SiteTrials.MAX_TRIALS + trial - 1;
         if (!Double.isNaN(p.values[at])) {
-            p.problem((longLayout ? "line " + line + ": " : "") + site.label() + " trial " + trial
-                    + " appears twice for this visit (same person, date, time and measurer); remove the repeated row");
+            p.problem((longLayout ? tr("reading.line", String.valueOf(line)) : "") + tr("reading.twice", site.shown(),
+                    trial));
             return;
         }
         p.values[at] = value;
@@ -745,7 +738,7 @@ final class ImportReading {
     private LocalDate parseDate(String text, String what, List<String> why) {
         String t = text == null ? "" : text.strip();
         if (t.isEmpty()) {
-            why.add("the " + what + " is empty");
+            why.add(tr("reading.dateEmpty", what));
             return null;
         }
         List<DateTimeFormatter> fs = options.monthFirst()
@@ -758,7 +751,7 @@ final class ImportReading {
                 // try the next format
             }
         }
-        why.add("the " + what + " \"" + t + "\" is not a date (use 2024-03-05 or 05/03/2024)");
+        why.add(tr("reading.notDate", what, t));
         return null;
     }
 }

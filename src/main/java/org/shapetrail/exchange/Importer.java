@@ -102,25 +102,25 @@ public final class Importer {
         try {
             format = CsvInput.detect(file);
         } catch (MalformedInputException e) {
-            return failed(List.of(), "It is not UTF-8 text; save it from the spreadsheet as CSV UTF-8.");
+            return failed(List.of(), org.shapetrail.i18n.Messages.tr("import.notUtf8"));
         } catch (IOException e) {
-            return failed(List.of(), "It cannot be read (" + e.getMessage() + ").");
+            return failed(List.of(), org.shapetrail.i18n.Messages.tr("import.unreadable", e.getMessage()));
         }
         DecimalStyle decimals = options.decimals() != null ? options.decimals() : format.decimals();
         try (CsvRows rows = new CsvRows(file, format.delimiter())) {
             List<String> headers = rows.header();
             if (headers.isEmpty()) {
-                return failed(List.of(), "It is empty: there is no header row.");
+                return failed(List.of(), org.shapetrail.i18n.Messages.tr("import.empty"));
             }
             List<Column> cols = columns != null ? columns : ColumnMapper.suggest(headers);
             if (cols.size() != headers.size()) {
-                return failed(cols, "The mapping has " + cols.size() + " columns but the file has " + headers.size() + ".");
+                return failed(cols, org.shapetrail.i18n.Messages.tr("import.mapping", cols.size(), headers.size()));
             }
             return new ImportReading(existing, options, decimals, cols, stream).read(rows);
         } catch (MalformedInputException e) {
-            return failed(List.of(), "It is not UTF-8 text; save it from the spreadsheet as CSV UTF-8.");
+            return failed(List.of(), org.shapetrail.i18n.Messages.tr("import.notUtf8"));
         } catch (IOException | UncheckedIOException | IllegalStateException | IllegalArgumentException e) {
-            return failed(List.of(), "It is not a CSV file Shapetrail can read (" + e.getMessage() + ").");
+            return failed(List.of(), org.shapetrail.i18n.Messages.tr("import.notCsv", e.getMessage()));
         }
     }
 
