@@ -1,5 +1,5 @@
-# The window's, the charts' and the checks' texts in the three languages. Run: python3 src/main/i18n/window.py
-# Reads src/main/i18n/window/*.tsv (one text a line: key, English, Spanish, Portuguese, separated by tabs;
+# Every text but the letters' in the three languages (window, checks, charts, record, import, command line).
+# Reads src/main/i18n/texts/*.tsv (one text a line: key, English, Spanish, Portuguese, separated by tabs;
 # a line starting with # is a comment) and writes every key but the letter.* ones (src/main/i18n/letters.py)
 # of src/main/resources/org/shapetrail/i18n/messages*.properties. Write apostrophes plainly: they are
 # doubled here for MessageFormat. A Spanish or Portuguese text ending in " (review)" holds a term a native
@@ -8,7 +8,7 @@ import glob, os
 here = os.path.dirname(os.path.abspath(__file__))
 root = os.path.join(here, "..", "resources", "org", "shapetrail", "i18n")
 rows, seen = [], {}
-for tsv in sorted(glob.glob(os.path.join(here, "window", "*.tsv"))):
+for tsv in sorted(glob.glob(os.path.join(here, "texts", "*.tsv"))):
     rows.append(("#", os.path.basename(tsv)))
     for n, line in enumerate(open(tsv, encoding="utf-8").read().splitlines(), 1):
         if not line.strip() or line.startswith("#"):
@@ -27,8 +27,8 @@ for i, suffix in enumerate(("", "_es", "_pt")):
     path = os.path.join(root, "messages" + suffix + ".properties")
     letters = [l for l in open(path, encoding="utf-8").read().splitlines()
                if l.startswith("letter.") or l.startswith("# letters")]
-    out = ["# window, charts and checks (written by src/main/i18n/window.py)"]
+    out = ["# window, charts and checks (written by src/main/i18n/texts.py)"]
     for key, texts in rows:
         out.append("# " + texts if key == "#" else key + " = " + esc(texts[i]))
     open(path, "w", encoding="utf-8").write("\n".join(out + [""] + letters) + "\n")
-print("wrote", len(seen), "window keys in 3 languages")
+print("wrote", len(seen), "keys in 3 languages")
