@@ -20,8 +20,13 @@ for tsv in sorted(glob.glob(os.path.join(here, "texts", "*.tsv"))):
         assert not key.startswith("letter."), key
         seen[key] = "%s:%d" % (os.path.basename(tsv), n)
         rows.append((key, [c.rstrip("\r").removesuffix(" (review)").replace("\\n", "\n") for c in cells[1:]]))
-def esc(v):
-    v = v.replace("'", "''").replace("\\", "\\\\").replace("\n", "\\n")
+def picocli(key):
+    # the command line's help: picocli reads these itself as String.format patterns, not MessageFormat
+    # (the qualified ones start with "shapetrail.", the shared options' keys have no dot at all)
+    return key.startswith("shapetrail.") or key.startswith("usage.") or "." not in key
+def esc(v, key=""):
+    v = v if picocli(key) else v.replace("'", "''")
+    v = v.replace("\\", "\\\\").replace("\n", "\\n")
     return "\\" + v if v.startswith(" ") else v  # a properties value keeps a leading space only escaped
 for i, suffix in enumerate(("", "_es", "_pt")):
     path = os.path.join(root, "messages" + suffix + ".properties")
@@ -29,6 +34,6 @@ for i, suffix in enumerate(("", "_es", "_pt")):
                if l.startswith("letter.") or l.startswith("# letters")]
     out = ["# window, charts and checks (written by src/main/i18n/texts.py)"]
     for key, texts in rows:
-        out.append("# " + texts if key == "#" else key + " = " + esc(texts[i]))
+        out.append("# " + texts if key == "#" else key + " = " + esc(texts[i], key))
     open(path, "w", encoding="utf-8").write("\n".join(out + [""] + letters) + "\n")
 print("wrote", len(seen), "keys in 3 languages")

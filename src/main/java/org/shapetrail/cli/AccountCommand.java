@@ -17,9 +17,6 @@ import picocli.CommandLine.Spec;
 
 /** {@code account}: staff accounts on a server (an administrator's work). */
 @Command(name = "account", mixinStandardHelpOptions = true,
-        description = "Staff accounts on a server: each person logs in as themselves, as a measurer (enters and"
-                + " edits their own visits), a coach (reads everything, makes training blocks, writes letters) or an"
-                + " administrator (people, squads, measurers, accounts, erasure). The server enforces the roles.",
         subcommands = {AccountCommand.Add.class, AccountCommand.ListAccounts.class, AccountCommand.Role.class,
             AccountCommand.Remove.class})
 final class AccountCommand implements Runnable {
@@ -36,19 +33,18 @@ final class AccountCommand implements Runnable {
                 + "\": choose measurer, coach or administrator. Nothing was changed."));
     }
 
-    @Command(name = "add", mixinStandardHelpOptions = true, description = "Make an account with a role.")
+    @Command(name = "add", mixinStandardHelpOptions = true)
     static final class Add implements Callable<Integer> {
         @Mixin
         DbOption db;
 
-        @Parameters(index = "0", paramLabel = "NAME", description = "the login, e.g. ana.ruiz")
+        @Parameters(index = "0", paramLabel = "NAME", descriptionKey = "shapetrail.account.add.name")
         String name;
 
-        @Option(names = "--role", required = true, paramLabel = "ROLE", description = "measurer, coach or administrator")
+        @Option(names = "--role", required = true, paramLabel = "ROLE")
         String role;
 
-        @Option(names = "--password-stdin", description = "read the new password from the first line of standard input"
-                + " (otherwise it is asked for twice, unseen)")
+        @Option(names = "--password-stdin")
         boolean passwordStdin;
 
         @Spec
@@ -93,7 +89,7 @@ final class AccountCommand implements Runnable {
         }
     }
 
-    @Command(name = "list", mixinStandardHelpOptions = true, description = "List the accounts and their roles.")
+    @Command(name = "list", mixinStandardHelpOptions = true)
     static final class ListAccounts implements Callable<Integer> {
         @Mixin
         DbOption db;
@@ -115,7 +111,7 @@ final class AccountCommand implements Runnable {
         }
     }
 
-    @Command(name = "role", mixinStandardHelpOptions = true, description = "Give an account another role.")
+    @Command(name = "role", mixinStandardHelpOptions = true)
     static final class Role implements Callable<Integer> {
         @Mixin
         DbOption db;
@@ -123,7 +119,7 @@ final class AccountCommand implements Runnable {
         @Parameters(index = "0", paramLabel = "NAME")
         String name;
 
-        @Parameters(index = "1", paramLabel = "ROLE", description = "measurer, coach or administrator")
+        @Parameters(index = "1", paramLabel = "ROLE", descriptionKey = "shapetrail.account.role.role")
         String role;
 
         @Spec
@@ -143,8 +139,7 @@ final class AccountCommand implements Runnable {
         }
     }
 
-    @Command(name = "remove", mixinStandardHelpOptions = true,
-            description = "End an account. What it entered stays, and the audit trail keeps its name.")
+    @Command(name = "remove", mixinStandardHelpOptions = true)
     static final class Remove implements Callable<Integer> {
         @Mixin
         DbOption db;

@@ -10,13 +10,12 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code backup TARGET}: a consistent copy of the file, safe while the app has it open. */
-@Command(name = "backup", mixinStandardHelpOptions = true,
-        description = "Write a consistent copy of a Shapetrail file (safe while the app has it open).")
+@Command(name = "backup", mixinStandardHelpOptions = true)
 final class BackupCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
 
-    @Parameters(index = "0", paramLabel = "TARGET", description = "File to write the backup to.")
+    @Parameters(index = "0", paramLabel = "TARGET", descriptionKey = "shapetrail.backup.target")
     Path target;
 
     @picocli.CommandLine.Mixin

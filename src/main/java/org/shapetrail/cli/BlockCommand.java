@@ -24,7 +24,6 @@ import picocli.CommandLine.Spec;
  * earliest from the last) unless chosen with {@code --pick PERSON_ID=BEFORE_DATE,AFTER_DATE}.
  */
 @Command(name = "block", mixinStandardHelpOptions = true,
-        description = "List, create, edit or delete training blocks.",
         subcommands = {BlockCommand.ListBlocks.class, BlockCommand.NewBlock.class, BlockCommand.EditBlock.class,
             BlockCommand.DeleteBlock.class})
 final class BlockCommand implements Runnable {
@@ -86,7 +85,7 @@ final class BlockCommand implements Runnable {
         return on.get(0).id();
     }
 
-    @Command(name = "list", mixinStandardHelpOptions = true, description = "List the training blocks.")
+    @Command(name = "list", mixinStandardHelpOptions = true)
     static final class ListBlocks implements Callable<Integer> {
         @Mixin
         DbOption db;
@@ -112,28 +111,27 @@ final class BlockCommand implements Runnable {
         }
     }
 
-    @Command(name = "new", mixinStandardHelpOptions = true, description = "Create a training block for a squad.")
+    @Command(name = "new", mixinStandardHelpOptions = true)
     static final class NewBlock implements Callable<Integer> {
         @Mixin
         DbOption db;
 
-        @Option(names = "--squad", required = true, paramLabel = "NAME", description = "the squad")
+        @Option(names = "--squad", required = true, paramLabel = "NAME")
         String squad;
 
-        @Option(names = "--name", required = true, paramLabel = "NAME", description = "the block's name (unique)")
+        @Option(names = "--name", required = true, paramLabel = "NAME")
         String name;
 
-        @Option(names = "--start", required = true, paramLabel = "DATE", description = "first day, yyyy-mm-dd")
+        @Option(names = "--start", required = true, paramLabel = "DATE")
         LocalDate start;
 
-        @Option(names = "--end", required = true, paramLabel = "DATE", description = "last day, yyyy-mm-dd")
+        @Option(names = "--end", required = true, paramLabel = "DATE")
         LocalDate end;
 
-        @Option(names = "--aim", defaultValue = "", paramLabel = "TEXT", description = "what the block is for")
+        @Option(names = "--aim", defaultValue = "", paramLabel = "TEXT")
         String aim;
 
-        @Option(names = "--pick", paramLabel = "PERSON_ID=BEFORE_DATE,AFTER_DATE",
-                description = "a member's before and after visits, when not the default")
+        @Option(names = "--pick", paramLabel = "PERSON_ID=BEFORE_DATE,AFTER_DATE")
         List<String> picks = new ArrayList<>();
 
         @Spec
@@ -158,15 +156,15 @@ final class BlockCommand implements Runnable {
         }
     }
 
-    @Command(name = "edit", mixinStandardHelpOptions = true, description = "Change a training block.")
+    @Command(name = "edit", mixinStandardHelpOptions = true)
     static final class EditBlock implements Callable<Integer> {
         @Mixin
         DbOption db;
 
-        @Parameters(index = "0", paramLabel = "BLOCK", description = "the block's name")
+        @Parameters(index = "0", paramLabel = "BLOCK", descriptionKey = "shapetrail.block.edit.block")
         String block;
 
-        @Option(names = "--name", paramLabel = "NAME", description = "a new name")
+        @Option(names = "--name", paramLabel = "NAME")
         String name;
 
         @Option(names = "--start", paramLabel = "DATE")
@@ -178,11 +176,10 @@ final class BlockCommand implements Runnable {
         @Option(names = "--aim", paramLabel = "TEXT")
         String aim;
 
-        @Option(names = "--pick", paramLabel = "PERSON_ID=BEFORE_DATE,AFTER_DATE",
-                description = "a member's before and after visits (replaces that member's earlier choice)")
+        @Option(names = "--pick", paramLabel = "PERSON_ID=BEFORE_DATE,AFTER_DATE")
         List<String> picks = new ArrayList<>();
 
-        @Option(names = "--default-visits", description = "drop every chosen visit: all members take the default")
+        @Option(names = "--default-visits")
         boolean defaults;
 
         @Spec
@@ -212,16 +209,15 @@ final class BlockCommand implements Runnable {
         }
     }
 
-    @Command(name = "delete", mixinStandardHelpOptions = true,
-            description = "Delete a training block (its visits stay).")
+    @Command(name = "delete", mixinStandardHelpOptions = true)
     static final class DeleteBlock implements Callable<Integer> {
         @Mixin
         DbOption db;
 
-        @Parameters(index = "0", paramLabel = "BLOCK", description = "the block's name")
+        @Parameters(index = "0", paramLabel = "BLOCK", descriptionKey = "shapetrail.block.delete.block")
         String block;
 
-        @Option(names = "--yes", description = "Do not ask for confirmation.")
+        @Option(names = "--yes")
         boolean yes;
 
         @Spec

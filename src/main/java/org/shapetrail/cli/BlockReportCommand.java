@@ -17,18 +17,15 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /** {@code block-report}: did a training block change the squad's physique, and whose? */
-@Command(name = "block-report", mixinStandardHelpOptions = true,
-        description = "Report a training block: each athlete's change with its verdict, members left out and why,"
-                + " and the group statistics.")
+@Command(name = "block-report", mixinStandardHelpOptions = true)
 final class BlockReportCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
 
-    @Option(names = "--block", paramLabel = "NAME", description = "the block's name (default: the latest block)")
+    @Option(names = "--block", paramLabel = "NAME")
     String blockName;
 
-    @Option(names = "--window", paramLabel = "DAYS", defaultValue = "21",
-            description = "days around the block's first and last day to look for visits (default 21)")
+    @Option(names = "--window", paramLabel = "DAYS", defaultValue = "21")
     int window;
 
     @Mixin

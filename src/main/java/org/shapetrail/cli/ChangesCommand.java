@@ -15,14 +15,12 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code changes ID}: each change of a person's somatotype with its verdict against measurement noise. */
-@Command(name = "changes", mixinStandardHelpOptions = true,
-        description = "Report a person's somatotype changes (consecutive visits and first to last) with their"
-                + " noise verdicts.")
+@Command(name = "changes", mixinStandardHelpOptions = true)
 final class ChangesCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
 
-    @Parameters(index = "0", paramLabel = "ID", description = "The person's id (see the people command).")
+    @Parameters(index = "0", paramLabel = "ID", descriptionKey = "shapetrail.changes.id")
     long personId;
 
     @Mixin

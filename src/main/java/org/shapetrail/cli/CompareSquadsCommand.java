@@ -21,9 +21,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code compare-squads A B}: two independent groups' latest ratings compared. */
-@Command(name = "compare-squads", mixinStandardHelpOptions = true,
-        description = "Compare the latest ratings of two squads' members on a day: means, SAD between them,"
-                + " Welch t-tests per component and the two-sample Hotelling T².")
+@Command(name = "compare-squads", mixinStandardHelpOptions = true)
 final class CompareSquadsCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
@@ -34,7 +32,7 @@ final class CompareSquadsCommand implements Callable<Integer> {
     @Parameters(index = "1", paramLabel = "SQUAD_B")
     String second;
 
-    @Option(names = "--on", paramLabel = "DATE", description = "members on this day (default today), yyyy-mm-dd")
+    @Option(names = "--on", paramLabel = "DATE")
     LocalDate on;
 
     @Mixin

@@ -7,10 +7,7 @@ import picocli.CommandLine.Option;
 
 /** The {@code --db} option shared by every command that reads or writes a Shapetrail record. */
 final class DbOption {
-    @Option(names = "--db", paramLabel = "FILE|URI",
-            description = "Shapetrail file to use, which must exist, or a PostgreSQL server's address"
-                    + " postgresql://USER@HOST:PORT/DATABASE (password from PGPASSWORD or ~/.pgpass). Default: the"
-                    + " file in your data folder, seeded with the demo academy on first use.")
+    @Option(names = "--db", paramLabel = "FILE|URI")
     String target;
 
     /** Opens the chosen file (which must exist: nothing is created for a mistyped path) or server, or the default file. */

@@ -14,22 +14,18 @@ import picocli.CommandLine.Spec;
  * {@code erase-person ID}: erases a person and everything that refers to them (right to erasure), leaves
  * no trace of them in the file, its WAL or journal, and names the copies made earlier that still hold them.
  */
-@Command(name = "erase-person", mixinStandardHelpOptions = true,
-        description = "Erase a person with all their visits, trials, ratings and memberships, and wipe the file's"
-                + " free space so nothing of them can be read from its bytes. Cannot be undone. Backups made"
-                + " earlier are not reached: the command lists those it knows of.")
+@Command(name = "erase-person", mixinStandardHelpOptions = true)
 final class ErasePersonCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
 
-    @Parameters(index = "0", arity = "0..1", paramLabel = "ID", description = "The person's id (see the people command).")
+    @Parameters(index = "0", arity = "0..1", paramLabel = "ID", descriptionKey = "shapetrail.erase-person.id")
     Long personId;
 
-    @Option(names = "--yes", description = "Do not ask for confirmation.")
+    @Option(names = "--yes")
     boolean yes;
 
-    @Option(names = "--wipe-only", description = "Only wipe the free space (after an erasure that another program"
-            + " held up).")
+    @Option(names = "--wipe-only")
     boolean wipeOnly;
 
     @Spec

@@ -18,16 +18,14 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code export trials|visits|squads --out FILE}: CSV for spreadsheets and statistics software. */
-@Command(name = "export", mixinStandardHelpOptions = true,
-        description = "Export CSV: trials (every raw trial, re-importable), visits (a row per visit with trials,"
-                + " final values, somatotype, chart point, category and change verdict), squads (means and SAM).")
+@Command(name = "export", mixinStandardHelpOptions = true)
 final class ExportCommand implements Callable<Integer> {
     enum What { trials, visits, squads }
 
     @Mixin
     DbOption db;
 
-    @Parameters(index = "0", paramLabel = "WHAT", description = "trials, visits or squads")
+    @Parameters(index = "0", paramLabel = "WHAT", descriptionKey = "shapetrail.export.what")
     What what;
 
     @Option(names = "--out", required = true, paramLabel = "FILE")

@@ -13,16 +13,15 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code export-person ID}: one person's complete record as JSON (right of access). */
-@Command(name = "export-person", mixinStandardHelpOptions = true,
-        description = "Write one person's complete record (all visits and raw trials) as JSON.")
+@Command(name = "export-person", mixinStandardHelpOptions = true)
 final class ExportPersonCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
 
-    @Parameters(index = "0", paramLabel = "ID", description = "The person's id (see the people command).")
+    @Parameters(index = "0", paramLabel = "ID", descriptionKey = "shapetrail.export-person.id")
     long personId;
 
-    @Option(names = "--out", paramLabel = "FILE", description = "Write to FILE instead of standard output.")
+    @Option(names = "--out", paramLabel = "FILE")
     Path out;
 
     @picocli.CommandLine.Mixin

@@ -4,7 +4,7 @@ import picocli.CommandLine.Option;
 
 /** The {@code --format text|csv} option shared by the report commands. */
 final class FormatOption {
-    @Option(names = "--format", description = "text (default) or csv", defaultValue = "text",
+    @Option(names = "--format", defaultValue = "text",
             converter = FormatConverter.class)
     OutputFormat format = OutputFormat.TEXT;
 }

@@ -19,9 +19,7 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Spec;
 
 /** {@code growth}: stature velocity, maturity and rapid-growth alerts for a person or a squad. */
-@Command(name = "growth", mixinStandardHelpOptions = true,
-        description = "Report growth and maturity (velocity, maturity offset, observed PHV, target height,"
-                + " rapid-growth alert) for a person or a squad.")
+@Command(name = "growth", mixinStandardHelpOptions = true)
 final class GrowthCommand implements Callable<Integer> {
     @Mixin
     DbOption db;

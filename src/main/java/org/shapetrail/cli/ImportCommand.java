@@ -16,9 +16,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code import FILE.csv}: a dry run by default; {@code --commit} writes, all or nothing. */
-@Command(name = "import", mixinStandardHelpOptions = true,
-        description = "Import visits from CSV (wide: a row per visit; long: a row per trial). A dry run reports every"
-                + " row; --commit writes everything in one transaction, and only when no row is rejected.")
+@Command(name = "import", mixinStandardHelpOptions = true)
 final class ImportCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
@@ -26,22 +24,22 @@ final class ImportCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "FILE.csv")
     Path file;
 
-    @Option(names = "--commit", description = "write the import (default: dry run only)")
+    @Option(names = "--commit")
     boolean commit;
 
-    @Option(names = "--create-missing", description = "add people and measurers that are not in the file yet")
+    @Option(names = "--create-missing")
     boolean createMissing;
 
-    @Option(names = "--decimal-comma", description = "numbers use a decimal comma (default: comma for ; files)")
+    @Option(names = "--decimal-comma")
     boolean decimalComma;
 
-    @Option(names = "--decimal-point", description = "numbers use a decimal point")
+    @Option(names = "--decimal-point")
     boolean decimalPoint;
 
-    @Option(names = "--month-first", description = "read 03/04/2024 as 4 March (default: 3 April)")
+    @Option(names = "--month-first")
     boolean monthFirst;
 
-    @Option(names = "--show", defaultValue = "rejected", description = "rows to list: all, rejected (default), none")
+    @Option(names = "--show", defaultValue = "rejected")
     String show;
 
     @Spec

@@ -22,8 +22,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /** {@code letters}: progress letters (PDF) for a person or a squad. */
-@Command(name = "letters", mixinStandardHelpOptions = true,
-        description = "Write progress letters (PDF) for a person or a squad: one file each and one combined file.")
+@Command(name = "letters", mixinStandardHelpOptions = true)
 final class LettersCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
@@ -31,10 +30,10 @@ final class LettersCommand implements Callable<Integer> {
     @ArgGroup(exclusive = true, multiplicity = "1")
     Lookup.Who who;
 
-    @Option(names = "--from", required = true, paramLabel = "DATE", description = "first day of the period, yyyy-mm-dd")
+    @Option(names = "--from", required = true, paramLabel = "DATE")
     LocalDate from;
 
-    @Option(names = "--to", required = true, paramLabel = "DATE", description = "last day of the period, yyyy-mm-dd")
+    @Option(names = "--to", required = true, paramLabel = "DATE")
     LocalDate to;
 
     @Option(names = "--out", required = true, paramLabel = "FOLDER")
@@ -43,20 +42,19 @@ final class LettersCommand implements Callable<Integer> {
     @Option(names = "--academy", defaultValue = "Saltmarsh Bay Sports Academy")
     String academy;
 
-    @Option(names = "--sender", defaultValue = "the academy physiotherapist", description = "who signs")
+    @Option(names = "--sender")
     String sender;
 
-    @Option(names = "--role", defaultValue = "", description = "the sender's role, shown after the name")
+    @Option(names = "--role", defaultValue = "")
     String role;
 
-    @Option(names = "--contact", defaultValue = "via the academy office")
+    @Option(names = "--contact")
     String contact;
 
-    @Option(names = "--skinfolds-for-under-16", description = "also describe skinfold thickness for juniors under 16")
+    @Option(names = "--skinfolds-for-under-16")
     boolean skinfolds;
 
-    @Option(names = "--lang", paramLabel = "en|es|pt", description = "write every letter in this language (default:"
-            + " each person's letter language, else English)")
+    @Option(names = "--letter-lang", paramLabel = "en|es|pt")
     String lang;
 
     @picocli.CommandLine.Mixin
@@ -76,21 +74,25 @@ final class LettersCommand implements Callable<Integer> {
             people.addAll(who.histories(a, b, to));
         }
         if (lang != null && !org.shapetrail.i18n.Messages.LANGUAGES.contains(lang)) {
-            throw new org.shapetrail.ShapetrailException("There is no letter language \"" + lang + "\": choose en, es or"
-                    + " pt. Nothing was written.");
+            throw new org.shapetrail.ShapetrailException(org.shapetrail.i18n.Messages.tr("cli.letters.badLang", lang));
         }
-        LetterComposer c = new LetterComposer(b, new LetterSettings(academy, sender, role, contact, from, to, skinfolds),
-                Locale.UK);
+        // a person without a letter language of their own gets the command's language (British English by default)
+        Locale here = org.shapetrail.i18n.Messages.languageOf(org.shapetrail.i18n.Messages.current()).equals("en")
+                ? Locale.UK : org.shapetrail.i18n.Messages.current();
+        LetterComposer c = new LetterComposer(b, new LetterSettings(academy,
+                sender != null ? sender : org.shapetrail.i18n.Messages.tr("preview.role"), role,
+                contact != null ? contact : org.shapetrail.i18n.Messages.tr("preview.contact"), from, to, skinfolds),
+                here);
         if (lang != null) {
-            c = c.allIn(org.shapetrail.i18n.Messages.localeFor(lang, Locale.UK));
+            c = c.allIn(org.shapetrail.i18n.Messages.localeFor(lang, here));
         }
         var result = LetterBatch.write(c, people, out, overwrite.overwrite, OverwriteOption.HOW, (done, total) -> {
-            o.printf("\rLetters: %d of %d", done, total);
+            o.print("\r" + org.shapetrail.i18n.Messages.tr("cli.letters.progress", done, total));
             o.flush();
         }, () -> false);
         o.println();
-        o.println("Wrote " + result.letters().size() + " letter(s)" + (result.combined() == null ? "."
-                : " and " + result.combined() + "."));
+        o.println(result.combined() == null ? org.shapetrail.i18n.Messages.tr("cli.letters.wrote", result.letters().size())
+                : org.shapetrail.i18n.Messages.tr("cli.letters.wroteAll", result.letters().size(), result.combined()));
         result.refused().forEach(why -> spec.commandLine().getErr().println(why));
         return result.refused().isEmpty() ? 0 : 1;
     }

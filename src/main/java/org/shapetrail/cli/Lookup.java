@@ -29,10 +29,10 @@ final class Lookup {
 
     /** {@code --person ID} or {@code --squad NAME}, exactly one (an exclusive argument group). */
     static final class Who {
-        @Option(names = "--person", paramLabel = "ID", description = "one person's id")
+        @Option(names = "--person", paramLabel = "ID")
         Long person;
 
-        @Option(names = "--squad", paramLabel = "NAME", description = "the squad's members on the day")
+        @Option(names = "--squad", paramLabel = "NAME")
         String squad;
 
         /** The histories of the person, or of the squad's members on {@code day}. */

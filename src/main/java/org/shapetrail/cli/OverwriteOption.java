@@ -6,7 +6,6 @@ import picocli.CommandLine.Option;
 final class OverwriteOption {
     static final String HOW = "add --overwrite";
 
-    @Option(names = "--overwrite", description = "Replace output files that exist already (otherwise nothing is"
-            + " written and the existing files are named).")
+    @Option(names = "--overwrite")
     boolean overwrite;
 }

@@ -13,7 +13,7 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Spec;
 
 /** {@code people}: lists everyone in the file with their id and number of visits. */
-@Command(name = "people", mixinStandardHelpOptions = true, description = "List the people in a Shapetrail file.")
+@Command(name = "people", mixinStandardHelpOptions = true)
 final class PeopleCommand implements Callable<Integer> {
     @Mixin
     DbOption db;

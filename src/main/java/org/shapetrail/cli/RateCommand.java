@@ -36,8 +36,7 @@ import picocli.CommandLine.Spec;
  * {@code rate FILE.csv}: rates a CSV of final measurement values and writes the somatotypes as CSV to
  * standard output. Exit 0 when every row rated, 1 when any row was rejected, 2 when the file cannot be read.
  */
-@Command(name = "rate", mixinStandardHelpOptions = true,
-        description = "Rate a CSV file of final measurement values (Heath-Carter anthropometric somatotype).")
+@Command(name = "rate", mixinStandardHelpOptions = true)
 public final class RateCommand implements Callable<Integer> {
     /** Input column per site, as fixed by the command-line contract (docs/cli.md). */
     static final Map<String, Site> COLUMNS = columns();
@@ -45,11 +44,10 @@ public final class RateCommand implements Callable<Integer> {
     static final List<String> OUTPUT_HEADER = List.of("id", "endomorphy", "mesomorphy", "ectomorphy", "hwr",
             "x", "y", "category", "problems");
 
-    @Parameters(index = "0", paramLabel = "FILE.csv", description = "CSV with a header row; see docs/cli.md.")
+    @Parameters(index = "0", paramLabel = "FILE.csv", descriptionKey = "shapetrail.rate.file-csv")
     Path file;
 
-    @Option(names = "--uncorrected-endomorphy",
-            description = "Use the skinfold sum without the height correction (170.18/stature).")
+    @Option(names = "--uncorrected-endomorphy")
     boolean uncorrected;
 
     @Spec

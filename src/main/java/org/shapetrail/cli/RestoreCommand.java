@@ -10,16 +10,15 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code restore SOURCE}: replaces the file's whole content with a backup, after confirmation. */
-@Command(name = "restore", mixinStandardHelpOptions = true,
-        description = "Replace the whole content of a Shapetrail file with a backup.")
+@Command(name = "restore", mixinStandardHelpOptions = true)
 final class RestoreCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
 
-    @Parameters(index = "0", paramLabel = "SOURCE", description = "The backup to restore.")
+    @Parameters(index = "0", paramLabel = "SOURCE", descriptionKey = "shapetrail.restore.source")
     Path source;
 
-    @Option(names = "--yes", description = "Do not ask for confirmation.")
+    @Option(names = "--yes")
     boolean yes;
 
     @Spec

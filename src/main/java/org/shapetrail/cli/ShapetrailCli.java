@@ -6,7 +6,6 @@ import picocli.CommandLine.Command;
 
 /** The command line: {@code java -jar shapetrail.jar COMMAND ...}; see docs/cli.md. */
 @Command(name = "shapetrail", mixinStandardHelpOptions = true, versionProvider = ShapetrailCli.Version.class,
-        description = "Somatotype, growth and measurement-noise tools for practitioners.",
         subcommands = {RateCommand.class, PeopleCommand.class, TemCommand.class, ChangesCommand.class,
             GrowthCommand.class, BlockReportCommand.class, CompareSquadsCommand.class, LettersCommand.class,
             ImportCommand.class, ExportCommand.class, BackupCommand.class, RestoreCommand.class,
@@ -16,6 +15,10 @@ public final class ShapetrailCli implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    /** Read before the command runs (see {@link #execute}); declared so that every command accepts it. */
+    @CommandLine.Option(names = "--lang", paramLabel = "en|es|pt", scope = CommandLine.ScopeType.INHERIT)
+    String lang;
+
     @Override
     public void run() {
         spec.commandLine().usage(spec.commandLine().getOut());
@@ -23,7 +26,41 @@ public final class ShapetrailCli implements Runnable {
 
     /** Runs the command line with the given streams and returns the exit code. */
     public static int execute(String[] args, PrintWriter out, PrintWriter err) {
+        java.util.Locale before = org.shapetrail.i18n.Messages.current();
+        try {
+            String lang = languageAsked(args);
+            if (lang != null) {
+                if (!org.shapetrail.i18n.Messages.LANGUAGES.contains(lang)) {
+                    err.println(org.shapetrail.i18n.Messages.tr("cli.lang.bad", lang));
+                    err.flush();
+                    return 2;
+                }
+                org.shapetrail.i18n.Messages.use(org.shapetrail.i18n.Messages.localeFor(lang,
+                        java.util.Locale.getDefault(java.util.Locale.Category.FORMAT)));
+            }
+            return run(args, out, err);
+        } finally {
+            org.shapetrail.i18n.Messages.use(before); // a run in another language leaves the process as it was
+        }
+    }
+
+    /** The value of {@code --lang} anywhere in the arguments, or null. */
+    static String languageAsked(String[] args) {
+        String lang = null;
+        for (int i = 0; i < args.length; i++) {
+            if (args[i].equals("--lang") && i + 1 < args.length) {
+                lang = args[i + 1];
+            } else if (args[i].startsWith("--lang=")) {
+                lang = args[i].substring("--lang=".length());
+            }
+        }
+        return lang;
+    }
+
+    private static int run(String[] args, PrintWriter out, PrintWriter err) {
         CommandLine cl = new CommandLine(new ShapetrailCli());
+        // the help texts and messages in the language --lang names, else the system's (Messages.current)
+        cl.setResourceBundle(org.shapetrail.i18n.Messages.bundle(org.shapetrail.i18n.Messages.current()));
         cl.setOut(out);
         cl.setErr(err);
         // a failure a person can act on is shown as its message, never as a stack trace

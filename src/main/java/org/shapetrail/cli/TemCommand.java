@@ -12,8 +12,7 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Spec;
 
 /** {@code tem}: each measurer's technical error of measurement per site, against the targets. */
-@Command(name = "tem", mixinStandardHelpOptions = true,
-        description = "Report each measurer's TEM per site from the stored repeats, against the usual targets.")
+@Command(name = "tem", mixinStandardHelpOptions = true)
 final class TemCommand implements Callable<Integer> {
     @Mixin
     DbOption db;

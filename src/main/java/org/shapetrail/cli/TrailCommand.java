@@ -16,28 +16,26 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /** {@code trail}: the audit trail of a server's record, for a person, a visit or a range of days. */
-@Command(name = "trail", mixinStandardHelpOptions = true,
-        description = "List the audit trail of a record on a server: who entered, changed or deleted what, when,"
-                + " with the old and new values; for a person, a visit, or a range of days.")
+@Command(name = "trail", mixinStandardHelpOptions = true)
 final class TrailCommand implements Callable<Integer> {
     @Mixin
     DbOption db;
 
     static final class Which {
-        @Option(names = "--person", paramLabel = "ID", description = "a person's id: their record, visits, trials and ratings")
+        @Option(names = "--person", paramLabel = "ID")
         Long person;
 
-        @Option(names = "--visit", paramLabel = "ID", description = "one visit's id")
+        @Option(names = "--visit", paramLabel = "ID")
         Long visit;
 
-        @Option(names = "--from", paramLabel = "DATE", description = "first day (YYYY-MM-DD, UTC); with --to")
+        @Option(names = "--from", paramLabel = "DATE")
         LocalDate from;
     }
 
     @ArgGroup(exclusive = true, multiplicity = "1")
     Which which;
 
-    @Option(names = "--to", paramLabel = "DATE", description = "last day (YYYY-MM-DD, UTC; default: today)")
+    @Option(names = "--to", paramLabel = "DATE")
     LocalDate to;
 
     @Mixin

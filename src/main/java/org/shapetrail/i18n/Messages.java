@@ -28,6 +28,15 @@ public final class Messages {
     private Messages() {
     }
 
+    /**
+     * True for the command line's help texts, which picocli reads from the same bundle as String.format
+     * patterns (with %n and %%), not as MessageFormat patterns: the commands' own keys start with
+     * "shapetrail.", picocli's headings with "usage.", and the shared options' keys have no dot.
+     */
+    public static boolean readByPicocli(String key) {
+        return key.startsWith("shapetrail.") || key.startsWith("usage.") || key.indexOf('.') < 0;
+    }
+
     /** The locale the window and the commands speak now. */
     public static Locale current() {
         return current;

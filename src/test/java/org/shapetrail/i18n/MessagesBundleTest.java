@@ -27,6 +27,16 @@ class MessagesBundleTest {
         return out;
     }
 
+    /** A picocli help text's String.format specifiers (%n, %%, %s …) and ${…} variables, in order. */
+    static java.util.List<String> formatSpecifiers(String text) {
+        java.util.List<String> out = new java.util.ArrayList<>();
+        Matcher m = Pattern.compile("%[a-z%]|\\$\\{[^}]*\\}").matcher(text);
+        while (m.find()) {
+            out.add(m.group());
+        }
+        return out;
+    }
+
     static Set<String> ownKeys(String lang) {
         java.util.Properties p = new java.util.Properties();
         try (var in = Messages.class.getResourceAsStream("messages_" + lang + ".properties");
@@ -52,7 +62,11 @@ class MessagesBundleTest {
             for (String key : base) {
                 String text = other.getString(key);
                 assertFalse(text.isBlank(), lang + " " + key);
-                assertEquals(arguments(en.getString(key)), arguments(text), lang + " " + key);
+                if (Messages.readByPicocli(key)) {
+                    assertEquals(formatSpecifiers(en.getString(key)), formatSpecifiers(text), lang + " " + key);
+                } else {
+                    assertEquals(arguments(en.getString(key)), arguments(text), lang + " " + key);
+                }
             }
         }
         for (String key : base) {
@@ -68,6 +82,11 @@ class MessagesBundleTest {
         for (String lang : Messages.LANGUAGES) {
             ResourceBundle b = Messages.bundle(Locale.forLanguageTag(lang));
             for (String key : b.keySet()) {
+                if (Messages.readByPicocli(key)) {
+                    // picocli prints its texts as written: a doubled apostrophe would show doubled
+                    assertFalse(b.getString(key).contains("''"), lang + " " + key + ": " + b.getString(key));
+                    continue;
+                }
                 assertFalse(lone.matcher(b.getString(key)).find(), lang + " " + key + ": " + b.getString(key));
             }
         }
