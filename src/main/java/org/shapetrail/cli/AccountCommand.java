@@ -1,5 +1,7 @@
 package org.shapetrail.cli;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.io.BufferedReader;
 import java.io.InputStreamReader;
 import java.io.PrintWriter;
@@ -29,8 +31,7 @@ final class AccountCommand implements Runnable {
     }
 
     static StaffRole role(String word) {
-        return StaffRole.byWord(word).orElseThrow(() -> new StoreException("There is no role \"" + word
-                + "\": choose measurer, coach or administrator. Nothing was changed."));
+        return StaffRole.byWord(word).orElseThrow(() -> new StoreException(tr("cli.account.noRole", word)));
     }
 
     @Command(name = "add", mixinStandardHelpOptions = true)
@@ -59,8 +60,7 @@ final class AccountCommand implements Runnable {
                     a.add(name, r, password);
                     return null;
                 });
-                spec.commandLine().getOut().println("Made the account " + name + " (" + r.word() + ") on " + d.name()
-                        + ". Give them the password by a safe way; Shapetrail keeps no copy of it.");
+                spec.commandLine().getOut().println(tr("cli.account.made", name, r.word(), d.name()));
             } finally {
                 java.util.Arrays.fill(password, '\0');
             }
@@ -71,19 +71,18 @@ final class AccountCommand implements Runnable {
             if (passwordStdin) {
                 String line = new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8)).readLine();
                 if (line == null) {
-                    throw new StoreException("No password came on standard input; nothing was changed.");
+                    throw new StoreException(tr("cli.account.noStdin"));
                 }
                 return line.toCharArray();
             }
             java.io.Console console = System.console();
             if (console == null) {
-                throw new StoreException("There is no terminal to ask the password on: pass it with --password-stdin."
-                        + " Nothing was changed.");
+                throw new StoreException(tr("cli.account.noTerminal"));
             }
-            char[] first = console.readPassword("Password for %s: ", name);
-            char[] again = console.readPassword("The same again: ");
+            char[] first = console.readPassword("%s", tr("cli.account.password", name));
+            char[] again = console.readPassword("%s", tr("cli.account.again"));
             if (first == null || !java.util.Arrays.equals(first, again)) {
-                throw new StoreException("The two passwords differ; nothing was changed. Try again.");
+                throw new StoreException(tr("cli.account.differ"));
             }
             return first;
         }
@@ -102,7 +101,7 @@ final class AccountCommand implements Runnable {
             PrintWriter out = spec.commandLine().getOut();
             try (Database d = db.open()) {
                 java.util.List<Accounts.Account> all = d.accounts(Accounts::all);
-                out.printf("%-32s %s%n", "account", "role");
+                out.printf("%-32s %s%n", tr("cli.account.col.account"), tr("cli.account.col.role"));
                 for (Accounts.Account a : all) {
                     out.printf("%-32s %s%n", a.name(), a.role().word());
                 }
@@ -133,7 +132,7 @@ final class AccountCommand implements Runnable {
                     a.setRole(name, r);
                     return null;
                 });
-                spec.commandLine().getOut().println(name + " is now a " + r.word() + ".");
+                spec.commandLine().getOut().println(tr("cli.account.nowA", name, r.word()));
             }
             return 0;
         }
@@ -157,7 +156,7 @@ final class AccountCommand implements Runnable {
                     a.remove(name);
                     return null;
                 });
-                spec.commandLine().getOut().println("The account " + name + " is ended.");
+                spec.commandLine().getOut().println(tr("cli.account.ended", name));
             }
             return 0;
         }

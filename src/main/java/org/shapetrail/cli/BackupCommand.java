@@ -26,19 +26,18 @@ final class BackupCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        org.shapetrail.OutputFiles.refuseExisting(java.util.List.of(target), overwrite.overwrite, OverwriteOption.HOW);
+        org.shapetrail.OutputFiles.refuseExisting(java.util.List.of(target), overwrite.overwrite, OverwriteOption.how());
         try (Database d = db.open()) {
             d.backupTo(target);
             String digest = ContentDigest.of(d);
             try (Database copy = Database.open(target)) {
                 if (!digest.equals(ContentDigest.of(copy))) {
-                    spec.commandLine().getErr().println("The backup " + target + " does not match the original;"
-                            + " do not rely on it. Try again.");
+                    spec.commandLine().getErr().println(org.shapetrail.i18n.Messages.tr("cli.backup.mismatch", target));
                     return 1;
                 }
             }
-            spec.commandLine().getOut().println("Backed up " + d.name() + " to " + target.toAbsolutePath()
-                    + " (content checked).");
+            spec.commandLine().getOut().println(org.shapetrail.i18n.Messages.tr("cli.backup.done", d.name(),
+                    target.toAbsolutePath()));
         }
         return 0;
     }

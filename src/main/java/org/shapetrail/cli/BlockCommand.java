@@ -1,5 +1,7 @@
 package org.shapetrail.cli;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.io.PrintWriter;
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -39,9 +41,9 @@ final class BlockCommand implements Runnable {
     static TrainingBlock named(Database d, String name) {
         List<TrainingBlock> all = d.inTransaction(tx -> tx.blocks().all());
         return all.stream().filter(b -> b.name().strip().equalsIgnoreCase(name.strip())).findFirst()
-                .orElseThrow(() -> new StoreException("There is no training block called \"" + name + "\"; the blocks"
-                        + " are: " + (all.isEmpty() ? "none" : String.join(", ", all.stream().map(TrainingBlock::name)
-                        .toList())) + "."));
+                .orElseThrow(() -> new StoreException(tr("cli.block.none", name, all.isEmpty() ? tr("cli.none")
+                        : String.join(", ", all.stream().map(TrainingBlock::name)
+                        .toList()))));
     }
 
     /**
@@ -54,15 +56,13 @@ final class BlockCommand implements Runnable {
             String[] kv = g.split("=", 2);
             String[] days = kv.length == 2 ? kv[1].split(",", 2) : new String[0];
             if (days.length != 2) {
-                throw new StoreException("--pick " + g + " is not PERSON_ID=BEFORE_DATE,AFTER_DATE (for example"
-                        + " 12=2025-12-30,2026-04-15).");
+                throw new StoreException(tr("cli.pick.form", g));
             }
             long person;
             try {
                 person = Long.parseLong(kv[0].strip());
             } catch (NumberFormatException e) {
-                throw new StoreException("--pick " + g + ": \"" + kv[0] + "\" is not a person id (see the people"
-                        + " command).");
+                throw new StoreException(tr("cli.pick.id", g, kv[0]));
             }
             List<Visit> visits = d.inTransaction(tx -> tx.visits().ofPerson(person));
             out.put(person, new TrainingBlock.Pick(visitOn(visits, person, days[0], g), visitOn(visits, person, days[1], g)));
@@ -75,12 +75,11 @@ final class BlockCommand implements Runnable {
         try {
             day = LocalDate.parse(dayText.strip());
         } catch (java.time.format.DateTimeParseException e) {
-            throw new StoreException("--pick " + given + ": \"" + dayText + "\" is not a date (use 2025-12-30).");
+            throw new StoreException(tr("cli.pick.date", given, dayText));
         }
         List<Visit> on = visits.stream().filter(v -> v.measuredAt().toLocalDate().equals(day)).toList();
         if (on.size() != 1) {
-            throw new StoreException("--pick " + given + ": person " + person + " has " + (on.isEmpty() ? "no visit"
-                    : on.size() + " visits") + " on " + day + "; name a day with exactly one of their visits.");
+            throw new StoreException(tr("cli.pick.visits", given, String.valueOf(person), on.size(), day));
         }
         return on.get(0).id();
     }
@@ -140,17 +139,17 @@ final class BlockCommand implements Runnable {
         @Override
         public Integer call() {
             if (end.isBefore(start)) {
-                throw new StoreException("The last day " + end + " is before the first day " + start + ".");
+                throw new StoreException(tr("cli.block.order", end, start));
             }
             try (Database d = db.open()) {
                 Squad s = d.inTransaction(tx -> tx.squads().all()).stream().filter(x -> x.name().equalsIgnoreCase(
-                        squad.strip())).findFirst().orElseThrow(() -> new StoreException("There is no squad called \""
-                        + squad + "\" (see the people command for the squads)."));
+                        squad.strip())).findFirst().orElseThrow(() -> new StoreException(tr("cli.squad.none",
+                        squad)));
                 Map<Long, TrainingBlock.Pick> chosen = picks(d, picks);
                 TrainingBlock b = d.inTransaction(tx -> tx.blocks().insert(new TrainingBlock(0, name, s.id(), start, end,
                         aim, chosen)));
-                spec.commandLine().getOut().println("Created " + b.name() + " for " + s.name() + ", " + b.startsOn()
-                        + " to " + b.endsOn() + " (block-report --block \"" + b.name() + "\" reviews it).");
+                spec.commandLine().getOut().println(tr("cli.block.created", b.name(), s.name(), b.startsOn(),
+                        b.endsOn()));
             }
             return 0;
         }
@@ -194,7 +193,7 @@ final class BlockCommand implements Runnable {
                 LocalDate s = start != null ? start : b.startsOn();
                 LocalDate e = end != null ? end : b.endsOn();
                 if (e.isBefore(s)) {
-                    throw new StoreException("The last day " + e + " is before the first day " + s + ".");
+                    throw new StoreException(tr("cli.block.order", e, s));
                 }
                 TrainingBlock changed = new TrainingBlock(b.id(), name != null ? name : b.name(), b.squadId(), s, e,
                         aim != null ? aim : b.aim(), chosen);
@@ -202,8 +201,8 @@ final class BlockCommand implements Runnable {
                     tx.blocks().update(changed);
                     return null;
                 });
-                spec.commandLine().getOut().println("Changed " + changed.name() + ": " + changed.startsOn() + " to "
-                        + changed.endsOn() + ", " + changed.picks().size() + " member(s) with chosen visits.");
+                spec.commandLine().getOut().println(tr("cli.block.changed", changed.name(), changed.startsOn(),
+                        changed.endsOn(), changed.picks().size()));
             }
             return 0;
         }
@@ -228,13 +227,13 @@ final class BlockCommand implements Runnable {
             PrintWriter out = spec.commandLine().getOut();
             try (Database d = db.open()) {
                 TrainingBlock b = named(d, block);
-                if (!yes && !Confirmation.ask(out, "This deletes the training block " + b.name() + " (" + b.startsOn()
-                        + " to " + b.endsOn() + "); its visits stay.", "DELETE")) {
-                    out.println("Nothing was deleted.");
+                if (!yes && !Confirmation.ask(out, tr("cli.block.deleteAsk", b.name(), b.startsOn(),
+                        b.endsOn()), "DELETE")) { // not words: the word typed to confirm
+                    out.println(tr("cli.nothingDeleted"));
                     return 1;
                 }
                 d.inTransaction(tx -> tx.blocks().delete(b.id()));
-                out.println("Deleted the training block " + b.name() + "; its visits stay.");
+                out.println(tr("cli.block.deleted", b.name()));
             }
             return 0;
         }

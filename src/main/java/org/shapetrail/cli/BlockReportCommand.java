@@ -1,5 +1,7 @@
 package org.shapetrail.cli;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -43,7 +45,7 @@ final class BlockReportCommand implements Callable<Integer> {
             Academy a = Academy.load(d);
             List<TrainingBlock> blocks = a.blocks();
             if (blocks.isEmpty()) {
-                throw new StoreException("This file has no training blocks.");
+                throw new StoreException(tr("cli.blocks.none"));
             }
             TrainingBlock b = blockName == null ? blocks.get(blocks.size() - 1) : BlockCommand.named(d, blockName);
             r = BlockReview.of(HistoryBuilder.of(a, AnalysisSettings.standard()), b, window);
@@ -59,9 +61,7 @@ final class BlockReportCommand implements Callable<Integer> {
                     Table.num(x.change().mdc95()[1], 2), x.change().basis());
         }
         if (output.format == OutputFormat.TEXT) {
-            out.println(r.block().name() + " (" + squad + "), " + r.block().startsOn() + " to " + r.block().endsOn()
-                    + "; each member's chosen visits, or the latest rated visit in the " + window + " days up to the"
-                    + " start and the earliest in the " + window + " days from the end");
+            out.println(tr("cli.report.head", r.block().name(), squad, r.block().startsOn(), r.block().endsOn(), window));
             out.println();
         }
         athletes.write(out, output.format);
@@ -78,18 +78,19 @@ final class BlockReportCommand implements Callable<Integer> {
                     "effect_ci_low", "effect_ci_high").write(out, output.format);
             out.println();
             Table s = new Table("measure", "value");
-            s.row("athletes with both visits", g.n());
-            s.row("mean before", g.before().meanRating().toDisplayString());
-            s.row("mean after", g.after().meanRating().toDisplayString());
-            s.row("SAM before", Table.num(g.before().sam(), 2));
-            s.row("SAM after", Table.num(g.after().sam(), 2));
-            s.row("SAD between the means", Table.num(g.sadBetweenMeans(), 2));
+            s.row(tr("cli.report.both"), g.n());
+            s.row(tr("cli.report.meanBefore"), g.before().meanRating().toDisplayString());
+            s.row(tr("cli.report.meanAfter"), g.after().meanRating().toDisplayString());
+            s.row(tr("cli.report.samBefore"), Table.num(g.before().sam(), 2));
+            s.row(tr("cli.report.samAfter"), Table.num(g.after().sam(), 2));
+            s.row(tr("cli.report.sadMeans"), Table.num(g.sadBetweenMeans(), 2));
             if (g.hotelling() != null) {
-                s.row("Hotelling T2 (one-sample, on the changes)", Table.num(g.hotelling().t2(), 2));
-                s.row("F (" + g.hotelling().df1() + ", " + g.hotelling().df2() + ")", Table.num(g.hotelling().f(), 2));
+                s.row(tr("cli.report.hotelling"), Table.num(g.hotelling().t2(), 2));
+                s.row("F (" + g.hotelling().df1() + ", " + g.hotelling().df2() + ")", // not words: the F statistic's notation
+                        Table.num(g.hotelling().f(), 2));
                 s.row("p", Table.num(g.hotelling().pValue(), 4));
             }
-            s.row("athletes changed beyond noise", g.beyondNoise() + " of " + g.n());
+            s.row(tr("cli.report.beyond"), tr("cli.of", g.beyondNoise(), g.n()));
             s.write(out, output.format);
         }
         return 0;

@@ -47,11 +47,12 @@ final class ChangesCommand implements Callable<Integer> {
         }
         if (h.firstToLast() != null && h.changes().size() > 1) {
             var rated = h.rated();
-            add(t, rated.get(0).visit().measuredAt().toLocalDate() + " (first)",
-                    rated.get(rated.size() - 1).visit().measuredAt().toLocalDate() + " (last)", h.firstToLast());
+            add(t, org.shapetrail.i18n.Messages.tr("cli.changes.first", rated.get(0).visit().measuredAt().toLocalDate()),
+                    org.shapetrail.i18n.Messages.tr("cli.changes.last", rated.get(rated.size() - 1).visit().measuredAt()
+                            .toLocalDate()), h.firstToLast());
         }
         if (output.format == OutputFormat.TEXT) {
-            out.println(h.person().displayName() + ": " + h.rated().size() + " rated visit(s)");
+            out.println(org.shapetrail.i18n.Messages.tr("cli.changes.head", h.person().displayName(), h.rated().size()));
         }
         t.write(out, output.format);
         return 0;

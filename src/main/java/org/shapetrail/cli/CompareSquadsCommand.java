@@ -55,14 +55,15 @@ final class CompareSquadsCommand implements Callable<Integer> {
                 "d_ci_low", "d_ci_high").write(out, output.format);
         out.println();
         Table s = new Table("measure", "value");
-        s.row(first + ": n, mean, SAM", c.first().n() + ", " + c.first().meanRating().toDisplayString() + ", "
+        s.row(org.shapetrail.i18n.Messages.tr("cli.compare.group", first), c.first().n() + ", " + c.first().meanRating().toDisplayString() + ", "
                 + Table.num(c.first().sam(), 2));
-        s.row(second + ": n, mean, SAM", c.second().n() + ", " + c.second().meanRating().toDisplayString() + ", "
+        s.row(org.shapetrail.i18n.Messages.tr("cli.compare.group", second), c.second().n() + ", " + c.second().meanRating().toDisplayString() + ", "
                 + Table.num(c.second().sam(), 2));
-        s.row("SAD between the means", Table.num(c.sadBetweenMeans(), 2));
+        s.row(org.shapetrail.i18n.Messages.tr("cli.report.sadMeans"), Table.num(c.sadBetweenMeans(), 2));
         if (c.hotelling() != null) {
-            s.row("Hotelling T2 (two-sample, pooled covariance)", Table.num(c.hotelling().t2(), 2));
-            s.row("F (" + c.hotelling().df1() + ", " + c.hotelling().df2() + ")", Table.num(c.hotelling().f(), 2));
+            s.row(org.shapetrail.i18n.Messages.tr("cli.compare.hotelling"), Table.num(c.hotelling().t2(), 2));
+            s.row("F (" + c.hotelling().df1() + ", " + c.hotelling().df2() + ")", // not words: the F statistic's notation
+                    Table.num(c.hotelling().f(), 2));
             s.row("p", Table.num(c.hotelling().pValue(), 4));
         }
         s.write(out, output.format);

@@ -13,7 +13,7 @@ final class Confirmation {
 
     /** True when the person typed {@code word} (case-insensitive) at the prompt; false on anything else or EOF. */
     static boolean ask(PrintWriter out, String question, String word) {
-        out.print(question + " Type " + word + " to go on: ");
+        out.print(question + " " + org.shapetrail.i18n.Messages.tr("cli.confirm", word));
         out.flush();
         try {
             String line = new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8)).readLine();

@@ -1,5 +1,7 @@
 package org.shapetrail.cli;
 
+import static org.shapetrail.i18n.Messages.tr;
+
 import java.util.concurrent.Callable;
 import org.shapetrail.store.Database;
 import org.shapetrail.store.Person;
@@ -37,39 +39,33 @@ final class ErasePersonCommand implements Callable<Integer> {
         try (Database d = db.open()) {
             if (wipeOnly) {
                 d.wipeFreedSpace();
-                out.println("Wiped the free space of " + d.name() + ".");
+                out.println(tr("cli.erase.wiped", d.name()));
                 return 0;
             }
             if (personId == null) {
-                throw new StoreException("Name the person's id (see the people command), or use --wipe-only.");
+                throw new StoreException(tr("cli.erase.which"));
             }
             Person p = d.inTransaction(tx -> tx.people().find(personId))
-                    .orElseThrow(() -> new StoreException("There is no person with id " + personId + "."));
+                    .orElseThrow(() -> new StoreException(tr("store.noPerson", String.valueOf(personId))));
             int visits = d.inTransaction(tx -> tx.visits().ofPerson(personId).size());
-            if (!yes && !Confirmation.ask(out, "This erases " + p.displayName() + " and " + visits
-                    + " visit(s) with all trials from " + d.name() + ". It cannot be undone.", "ERASE")) {
-                out.println("Nothing was erased.");
+            if (!yes && !Confirmation.ask(out, tr("cli.erase.ask", p.displayName(), visits, d.name()), "ERASE")) { // not words: the word typed to confirm
+                out.println(tr("cli.erase.nothing"));
                 return 1;
             }
             Database.Erasure e = d.erasePerson(personId);
             if (d.engine() == org.shapetrail.store.Engine.POSTGRESQL) {
-                out.println("Erased " + p.displayName() + " and " + e.visits() + " visit(s) from " + d.name()
-                        + ", with their lines of the audit trail (one line records that an erasure happened), and"
-                        + " rewrote the tables. The server's write-ahead log, its archives and replicas, and dumps made"
-                        + " before may still hold them (docs/server.md).");
+                out.println(tr("cli.erase.server", p.displayName(), e.visits(), d.name()));
                 return 0;
             }
-            out.println("Erased " + p.displayName() + " and " + e.visits() + " visit(s); no trace of them is left in "
-                    + d.name() + " or its journal.");
+            out.println(tr("cli.erase.file", p.displayName(), e.visits(), d.name()));
             var held = e.copies().stream().filter(Database.KnownCopy::stillThere).toList();
             if (held.isEmpty()) {
-                out.println("Shapetrail knows of no earlier copy of this file that still exists.");
+                out.println(tr("cli.erase.noCopies"));
             } else {
-                out.println("Copies made earlier still hold " + p.displayName() + "'s data; erasure does not reach"
-                        + " them. Delete or destroy them if the data must go everywhere:");
+                out.println(tr("cli.erase.copies", p.displayName()));
                 held.forEach(c -> out.println("  " + c.path() + " (" + c.kind() + ", " + c.madeAt() + ")"));
             }
-            out.println("Copies made outside Shapetrail (other backups, exports, letters sent) are not known to it.");
+            out.println(tr("cli.erase.outside"));
         }
         return 0;
     }

@@ -40,7 +40,7 @@ final class ExportCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         int[] rows = new int[1];
-        OutputFiles.refuseExisting(java.util.List.of(out), overwrite.overwrite, OverwriteOption.HOW);
+        OutputFiles.refuseExisting(java.util.List.of(out), overwrite.overwrite, OverwriteOption.how());
         try (Database d = db.open()) {
             Academy a = Academy.load(d);
             OutputFiles.writeWhole(out, stream -> {
@@ -53,7 +53,7 @@ final class ExportCommand implements Callable<Integer> {
                 w.flush();
             });
         }
-        spec.commandLine().getOut().println("Wrote " + rows[0] + " row(s) to " + out + ".");
+        spec.commandLine().getOut().println(org.shapetrail.i18n.Messages.tr("cli.export.wrote", rows[0], out));
         return 0;
     }
 }

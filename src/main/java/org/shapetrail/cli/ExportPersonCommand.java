@@ -38,9 +38,10 @@ final class ExportPersonCommand implements Callable<Integer> {
                 spec.commandLine().getOut().print(json);
             } else {
                 org.shapetrail.OutputFiles.refuseExisting(java.util.List.of(out), overwrite.overwrite,
-                        OverwriteOption.HOW);
+                        OverwriteOption.how());
                 org.shapetrail.OutputFiles.writeWhole(out, s -> s.write(json.getBytes(StandardCharsets.UTF_8)));
-                spec.commandLine().getOut().println("Wrote the record of person " + personId + " to " + out + ".");
+                spec.commandLine().getOut().println(org.shapetrail.i18n.Messages.tr("cli.exportPerson.wrote",
+                        String.valueOf(personId), out));
             }
         }
         return 0;

@@ -10,7 +10,7 @@ final class FormatConverter implements CommandLine.ITypeConverter<OutputFormat> 
         try {
             return OutputFormat.valueOf(value.strip().toUpperCase(Locale.ROOT));
         } catch (IllegalArgumentException e) {
-            throw new CommandLine.TypeConversionException("'" + value + "' is not a format; use text or csv");
+            throw new CommandLine.TypeConversionException(org.shapetrail.i18n.Messages.tr("cli.format.bad", value));
         }
     }
 }

@@ -55,7 +55,7 @@ final class GrowthCommand implements Callable<Integer> {
         for (PersonHistory h : histories) {
             if (h.visits().isEmpty()) {
                 t.row(h.person().id(), h.person().displayName(), "", "", "", "", "", "", "", "", "", "", "", "", "",
-                        "no visits", "", "", "", "", "", "", "", "");
+                        org.shapetrail.i18n.Messages.tr("cli.growth.noVisits"), "", "", "", "", "", "", "", "");
                 continue;
             }
             var last = h.latest().orElseThrow();
@@ -76,14 +76,14 @@ final class GrowthCommand implements Callable<Integer> {
                     g.percentOfTarget() == null ? "" : Table.num(g.percentOfTarget(), 1),
                     g.predictedAdultCm() == null ? "" : Table.num(g.predictedAdultCm(), 1),
                     g.percentOfPredicted() == null ? "" : Table.num(g.percentOfPredicted(), 1),
-                    g.band() == null ? "" : g.band().words(), other(g, "sitting height"), other(g, "leg length"),
-                    other(g, "body mass"));
+                    g.band() == null ? "" : g.band().words(), other(g, GrowthSummary.OTHER.get(0)),
+                    other(g, GrowthSummary.OTHER.get(1)), other(g, GrowthSummary.OTHER.get(2)));
         }
         t.write(out, output.format);
         if (output.format == OutputFormat.TEXT) {
             out.println();
-            out.println("Maturity: " + MaturityEstimate.caution());
-            out.println("Rapid growth: " + org.shapetrail.growth.GrowthAlert.caution());
+            out.println(org.shapetrail.i18n.Messages.tr("cli.growth.maturity", MaturityEstimate.caution()));
+            out.println(org.shapetrail.i18n.Messages.tr("cli.growth.rapid", org.shapetrail.growth.GrowthAlert.caution()));
         }
         return 0;
     }

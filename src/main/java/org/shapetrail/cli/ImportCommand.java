@@ -60,22 +60,22 @@ final class ImportCommand implements Callable<Integer> {
             }
             if (show.equals("all")) {
                 for (ImportPlan.RowReport r : plan.rows()) {
-                    out.println("line " + r.line() + ": " + r.outcome().words() + (r.reason().isEmpty() ? ""
-                            : " — " + r.reason()));
+                    out.println(org.shapetrail.i18n.Messages.tr("reading.line", String.valueOf(r.line()))
+                            + r.outcome().words() + (r.reason().isEmpty() ? "" : " — " + r.reason()));
                 }
             } else if (show.equals("rejected")) {
                 plan.findings().forEach(f -> out.println(f.describe()));
             }
             out.println(plan.summary());
             if (!commit) {
-                out.println("Dry run: nothing was written. Run again with --commit to import.");
+                out.println(org.shapetrail.i18n.Messages.tr("cli.import.dryRun"));
                 return plan.canCommit() ? 0 : 1;
             }
             if (!plan.canCommit()) {
-                out.println("Nothing was written: fix the rejected rows and run again.");
+                out.println(org.shapetrail.i18n.Messages.tr("cli.import.refused"));
                 return 1;
             }
-            out.println("Imported " + plan.written() + " visit(s).");
+            out.println(org.shapetrail.i18n.Messages.tr("import.done", plan.written()));
         }
         return 0;
     }

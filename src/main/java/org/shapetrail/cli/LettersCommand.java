@@ -39,7 +39,7 @@ final class LettersCommand implements Callable<Integer> {
     @Option(names = "--out", required = true, paramLabel = "FOLDER")
     Path out;
 
-    @Option(names = "--academy", defaultValue = "Saltmarsh Bay Sports Academy")
+    @Option(names = "--academy", defaultValue = "Saltmarsh Bay Sports Academy") // not words: a name (the sample's)
     String academy;
 
     @Option(names = "--sender")
@@ -86,7 +86,7 @@ final class LettersCommand implements Callable<Integer> {
         if (lang != null) {
             c = c.allIn(org.shapetrail.i18n.Messages.localeFor(lang, here));
         }
-        var result = LetterBatch.write(c, people, out, overwrite.overwrite, OverwriteOption.HOW, (done, total) -> {
+        var result = LetterBatch.write(c, people, out, overwrite.overwrite, OverwriteOption.how(), (done, total) -> {
             o.print("\r" + org.shapetrail.i18n.Messages.tr("cli.letters.progress", done, total));
             o.flush();
         }, () -> false);

@@ -17,14 +17,14 @@ final class Lookup {
     }
 
     static Person person(Academy a, long id) {
-        return a.person(id).orElseThrow(() -> new StoreException("There is no person with id " + id
-                + "; the people command lists them."));
+        return a.person(id).orElseThrow(() -> new StoreException(org.shapetrail.i18n.Messages.tr(
+                "cli.person.none", String.valueOf(id))));
     }
 
     static Squad squad(Academy a, String name) {
         return a.squads().stream().filter(q -> q.name().equalsIgnoreCase(name.strip())).findFirst()
-                .orElseThrow(() -> new StoreException("There is no squad called \"" + name + "\"; the squads are: "
-                        + String.join(", ", a.squads().stream().map(Squad::name).toList())));
+                .orElseThrow(() -> new StoreException(org.shapetrail.i18n.Messages.tr("cli.squad.list", name,
+                        String.join(", ", a.squads().stream().map(Squad::name).toList()))));
     }
 
     /** {@code --person ID} or {@code --squad NAME}, exactly one (an exclusive argument group). */

@@ -4,7 +4,9 @@ import picocli.CommandLine.Option;
 
 /** {@code --overwrite}: the only way a command replaces a file that exists already. */
 final class OverwriteOption {
-    static final String HOW = "add --overwrite";
+    static String how() {
+        return org.shapetrail.i18n.Messages.tr("cli.overwrite.how");
+    }
 
     @Option(names = "--overwrite")
     boolean overwrite;

@@ -88,8 +88,8 @@ public final class RateCommand implements Callable<Integer> {
                 }
             }
             if (!missing.isEmpty()) {
-                err.println("Cannot rate " + file + ": the header lacks the column(s) " + String.join(", ", missing)
-                        + ". Required: " + String.join(", ", COLUMNS.keySet()) + " (id optional).");
+                err.println(org.shapetrail.i18n.Messages.tr("cli.rate.columns", file, missing.size(),
+                        String.join(", ", missing), String.join(", ", COLUMNS.keySet())));
                 return 2;
             }
             String idHeader = headerByKey.get("id");
@@ -122,20 +122,20 @@ public final class RateCommand implements Callable<Integer> {
                             outcome.somatotype().category().displayName(), "");
                 } else {
                     anyRejected = true;
-                    printer.printRecord(id, "", "", "", "", "", "", "", "line " + line + ": "
+                    printer.printRecord(id, "", "", "", "", "", "", "", org.shapetrail.i18n.Messages.tr("reading.line", String.valueOf(line))
                             + joined(merge(problems, outcome.problems())));
                 }
             }
             printer.flush();
             return anyRejected ? 1 : 0;
         } catch (NoSuchFileException e) {
-            err.println("Cannot rate " + file + ": no such file.");
+            err.println(org.shapetrail.i18n.Messages.tr("cli.rate.noFile", file));
             return 2;
         } catch (MalformedInputException e) {
-            err.println("Cannot rate " + file + ": it is not UTF-8 text; save it as CSV (UTF-8) and try again.");
+            err.println(org.shapetrail.i18n.Messages.tr("cli.rate.notUtf8", file));
             return 2;
         } catch (IOException | IllegalArgumentException | IllegalStateException e) {
-            err.println("Cannot rate " + file + ": " + e.getMessage());
+            err.println(org.shapetrail.i18n.Messages.tr("cli.rate.other", file, e.getMessage()));
             return 2;
         }
     }

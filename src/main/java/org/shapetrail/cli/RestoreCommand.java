@@ -28,13 +28,13 @@ final class RestoreCommand implements Callable<Integer> {
     public Integer call() {
         var out = spec.commandLine().getOut();
         try (Database d = db.open()) {
-            if (!yes && !Confirmation.ask(out, "Everything in " + d.name() + " will be replaced by " + source + ".",
-                    "RESTORE")) {
-                out.println("Nothing was changed.");
+            if (!yes && !Confirmation.ask(out, org.shapetrail.i18n.Messages.tr("cli.restore.ask", d.name(),
+                    source), "RESTORE")) { // not words: the word typed to confirm
+                out.println(org.shapetrail.i18n.Messages.tr("cli.nothingChanged"));
                 return 1;
             }
             d.restoreFrom(source);
-            out.println("Restored " + d.name() + " from " + source + ".");
+            out.println(org.shapetrail.i18n.Messages.tr("cli.restore.done", d.name(), source));
         }
         return 0;
     }

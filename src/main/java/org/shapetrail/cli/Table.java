@@ -58,6 +58,9 @@ final class Table {
             }
             return;
         }
+        // the aligned text is for reading: its numbers take the decimal separator of the command's language
+        // (CSV keeps the decimal point of the documented formats)
+        List<List<String>> rows = this.rows.stream().map(r -> r.stream().map(Table::shown).toList()).toList();
         int[] w = new int[header.size()];
         for (int i = 0; i < w.length; i++) {
             w[i] = header.get(i).length();
@@ -71,6 +74,31 @@ final class Table {
         }
         out.flush();
     }
+
+    /** A number (or a rating like 2.5-4.0-3.1, or 6.1 ± 1.4) with the language's decimal separator. */
+    static String shown(String cell) {
+        char sep = java.text.DecimalFormatSymbols.getInstance(org.shapetrail.i18n.Messages.supported(
+                org.shapetrail.i18n.Messages.current())).getDecimalSeparator();
+        String word = WORDS.get(cell);
+        if (word != null) {
+            return org.shapetrail.i18n.Messages.tr(word);
+        }
+        if (sep == '.' || !NUMBERS.matcher(cell).matches()) {
+            return cell;
+        }
+        return cell.replaceAll("(?<=\\d)\\.(?=\\d)", String.valueOf(sep));
+    }
+
+    /** The code words the CSV formats hold, and their keys for the aligned text. */
+    private static final java.util.Map<String, String> WORDS = java.util.Map.of(
+            org.shapetrail.noise.Verdict.BEYOND_NOISE.words(), "verdict.BEYOND_NOISE",
+            org.shapetrail.noise.Verdict.BORDERLINE.words(), "verdict.BORDERLINE",
+            org.shapetrail.noise.Verdict.WITHIN_NOISE.words(), "verdict.WITHIN_NOISE",
+            "yes", "cli.yes", "no", "cli.no");
+
+    /** Cells made of numbers only: "1.43", "-0.5", "2.5-4.0-3.1", "6.1 ± 1.4", "12.5 %". */
+    private static final java.util.regex.Pattern NUMBERS = java.util.regex.Pattern.compile(
+            "[-+]?\\d+(\\.\\d+)?(\\s*[-–±/]\\s*[-+]?\\d+(\\.\\d+)?)*(\\s*%)?");
 
     private static void line(PrintWriter out, List<String> cells, int[] w) {
         StringBuilder sb = new StringBuilder();

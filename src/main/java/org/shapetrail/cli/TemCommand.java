@@ -38,7 +38,8 @@ final class TemCommand implements Callable<Integer> {
                     Table.num(r.estimate().relativeTemPercent(), 2),
                     r.estimate().reliability().isPresent() ? Table.num(r.estimate().reliability().getAsDouble(), 3) : "",
                     Table.num(TemTargets.target(r.site().kind()), 1), r.standing().words(),
-                    r.usesDefault() ? "default (fewer than " + model.defaults().minPeople() + " people)" : "own TEM");
+                    r.usesDefault() ? org.shapetrail.i18n.Messages.tr("cli.tem.default", model.defaults().minPeople())
+                            : org.shapetrail.i18n.Messages.tr("measurers.own"));
         }
         t.write(out, output.format);
         if (!model.interMeasurer().isEmpty()) {

@@ -49,8 +49,7 @@ final class TrailCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         try (Database d = db.open()) {
             if (d.engine() == Engine.SQLITE) {
-                spec.commandLine().getErr().println("A file has no accounts and keeps no audit trail: its one user may"
-                        + " do everything. The trail is kept for a record on a server (docs/server.md).");
+                spec.commandLine().getErr().println(org.shapetrail.i18n.Messages.tr("cli.trail.file"));
                 return 1;
             }
             List<AuditEntry> lines = d.inTransaction(tx -> which.person != null ? tx.trail().ofPerson(which.person)

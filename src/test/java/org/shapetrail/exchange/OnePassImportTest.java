@@ -161,7 +161,7 @@ class OnePassImportTest {
         int code = ShapetrailCli.execute(new String[] {"import", "--db", db.toString(), "--commit", "--create-missing",
             csv.toString()}, new PrintWriter(out), new PrintWriter(err));
         assertEquals(0, code, err.toString());
-        assertTrue(out.toString().contains("Imported 2 visit(s)."), out.toString());
+        assertTrue(out.toString().contains("Imported 2 visits."), out.toString()); // plural wording of import.done
         try (Database d = Database.open(db)) {
             assertEquals(Integer.valueOf(2), d.inTransaction(tx -> tx.visits().count()));
         }

@@ -116,7 +116,8 @@ class ErasureScanTest {
         int code = ShapetrailCli.execute(new String[] {"erase-person", "--yes", "--db", db.toString(),
             String.valueOf(id)}, new PrintWriter(out), new PrintWriter(err));
         assertEquals(0, code, err.toString());
-        assertTrue(out.toString().startsWith("Erased " + NAME + " and 3 visit(s); no trace of them is left in "), out.toString());
+        // three visits, in the plural (cli.erase.file's wording)
+        assertTrue(out.toString().startsWith("Erased " + NAME + " and 3 visits; no trace of them is left in "), out.toString());
         assertEquals(List.of(), traces(folder));
         try (Database d = Database.open(db)) {
             assertEquals("ok", d.integrityCheck());
