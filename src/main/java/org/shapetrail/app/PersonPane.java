@@ -59,7 +59,7 @@ public final class PersonPane extends BorderPane {
         previewLetter.setId("preview-letter");
         editPerson.setId("edit-person");
         moveSquad.setId("move-squad");
-        column(tr("person.col.date"), VisitLine::date, 100);
+        column(tr("person.col.date"), VisitLine::date, 125);
         column(tr("person.col.age"), VisitLine::age, 50);
         column(tr("person.col.measurer"), VisitLine::measurer, 120);
         column(tr("person.col.context"), VisitLine::context, 110);

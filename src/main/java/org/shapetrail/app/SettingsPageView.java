@@ -111,6 +111,11 @@ final class SettingsPageView {
 
     /** The locale a language choice gives (the system's for {@link #SYSTEM}). */
     static Locale localeOf(String code) {
-        return code == null || code.equals(SYSTEM) ? Languages.system() : Messages.localeFor(code, Languages.system());
+        if (code == null || code.equals(SYSTEM)) {
+            return Languages.system();
+        }
+        // a language chosen away from its countries: Portugal's Portuguese (the one the texts are written in)
+        Locale l = Messages.localeFor(code, Languages.system());
+        return l.getCountry().isEmpty() && code.equals("pt") ? Locale.forLanguageTag("pt-PT") : l;
     }
 }
