@@ -104,7 +104,8 @@ public final class HistoryBuilder {
 
     /** The verdict on the change between two rated visits (measurers possibly different). */
     public ChangeVerdict verdict(VisitResult a, VisitResult b) {
-        String basis = a.basis().equals(b.basis()) ? a.basis() : a.basis() + " and " + b.basis();
+        String basis = a.basis().equals(b.basis()) ? a.basis() : org.shapetrail.i18n.Messages.tr("basis.both", a.basis(),
+                b.basis());
         return ChangeAssessment.assess(a.somatotype().rating(), a.covariance(), b.somatotype().rating(),
                 b.covariance(), basis);
     }

@@ -126,7 +126,7 @@ public final class NoiseModel {
     public ErrorProfile profileOf(long measurerId) {
         ErrorProfile p = profiles.get(measurerId);
         if (p == null) {
-            return ErrorProfile.defaultsFor("unknown measurer", defaults);
+            return ErrorProfile.defaultsFor(org.shapetrail.i18n.Messages.tr("basis.unknownMeasurer"), defaults);
         }
         return p;
     }
