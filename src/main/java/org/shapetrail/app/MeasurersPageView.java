@@ -31,11 +31,11 @@ final class MeasurersPageView {
         this.ctx = ctx;
         tem.setId("tem-table");
         column(tr("measurers.col.measurer"), r -> r.measurer().name(), 120);
-        column(tr("measurers.col.site"), r -> r.site().shown(), 170);
-        column(tr("measurers.col.people"), r -> Integer.toString(r.estimate().people()), 60);
+        column(tr("measurers.col.site"), r -> r.site().shown(), 220);
+        column(tr("measurers.col.people"), r -> Integer.toString(r.estimate().people()), 80);
         column(tr("measurers.col.tem"), r -> Numbers.fmt(ctx.locale, r.estimate().duplicateTem(), 3) + " " + r.site().unit().symbol(), 80);
-        column(tr("measurers.col.relative"), r -> Numbers.fmt(ctx.locale, r.estimate().relativeTemPercent(), 2) + " %", 90);
-        column(tr("measurers.col.target"), r -> "≤ " + Numbers.fmt(ctx.locale, TemTargets.target(r.site().kind()), 1) + " %", 60);
+        column(tr("measurers.col.relative"), r -> Numbers.fmt(ctx.locale, r.estimate().relativeTemPercent(), 2) + " %", 110);
+        column(tr("measurers.col.target"), r -> "≤ " + Numbers.fmt(ctx.locale, TemTargets.target(r.site().kind()), 1) + " %", 85);
         column(tr("measurers.col.standing"), r -> r.standing().shown(), 200);
         column(tr("measurers.col.uses"), r -> r.usesDefault() ? tr("measurers.default") : tr("measurers.own"), 170);
         Label note = new Label(tr("measurers.note", DefaultErrors.MIN_PEOPLE));

@@ -155,4 +155,33 @@ class OtherLanguagesGuiTest {
         WorkbenchGuiTest.snapshot(stage.getScene().getRoot(), "workbench-person-pt.png");
         WaitForAsyncUtils.asyncFx(() -> null).get(5, TimeUnit.SECONDS);
     }
+
+    @Test
+    void theSquadBlocksAndMeasurersPagesSpeakSpanishToo(FxRobot robot) throws Exception {
+        robot.interact(() -> {
+            workbench().pages().getSelectionModel().select(1);
+            workbench().squadChoice().setValue("Senior squad");
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        String squad = robot.lookup("#squad-summary").queryAs(Label.class).getText();
+        // squad.summary's Spanish, with the mean rating and SAM in decimal commas
+        assertTrue(squad.matches("\\d+ integrantes actuales, \\d+ con somatotipo\\. Somatotipo medio \\d,\\d-\\d,\\d-\\d,\\d;"
+                + " SAM \\d,\\d\\d .*"), squad);
+        WorkbenchGuiTest.snapshot(stage.getScene().getRoot(), "squad-es.png");
+        robot.interact(() -> ((TabPane) robot.lookup("#squad-views").query()).getSelectionModel().select(1));
+        WaitForAsyncUtils.waitForFxEvents();
+        var l = workbench().viewModel().loadedProperty().get();
+        var review = org.shapetrail.history.BlockReview.of(l.builder(), l.builder().academy().blocks().stream()
+                .filter(x -> x.name().equals(DemoAcademy.BLOCK_NAME)).findFirst().orElseThrow(), 21);
+        String block = robot.lookup("#block-summary").queryAs(Label.class).getText();
+        // the same count WorkbenchGuiTest reads in English, in block.beyond's Spanish
+        assertTrue(block.contains(review.result().beyondNoise() + " de " + review.result().n()
+                + " cambiaron más allá del ruido de medición"), block);
+        assertTrue(robot.lookup("#block-left-out").queryAs(Label.class).getText().startsWith("Fuera del análisis: "));
+        WorkbenchGuiTest.snapshot(stage.getScene().getRoot(), "block-es.png");
+        robot.interact(() -> workbench().pages().getSelectionModel().select(2));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(robot.lookup("#measurer-list").queryAs(Label.class).getText().startsWith("Evaluadores en este archivo: "));
+        WorkbenchGuiTest.snapshot(stage.getScene().getRoot(), "measurers-es.png");
+    }
 }
