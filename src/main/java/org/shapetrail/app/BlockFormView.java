@@ -74,10 +74,10 @@ final class BlockFormView {
         box.setPadding(new Insets(10));
         box.setPrefWidth(640);
         d.getDialogPane().setContent(box);
-        d.getDialogPane().getButtonTypes().addAll(ButtonType.CANCEL, ButtonType.OK);
-        d.getDialogPane().lookupButton(ButtonType.OK).disableProperty().bind(vm.canSave.not());
+        ButtonType ok = Buttons.cancelAndOk(d);
+        d.getDialogPane().lookupButton(ok).disableProperty().bind(vm.canSave.not());
         Optional<ButtonType> b = d.showAndWait();
-        if (b.isPresent() && b.get() == ButtonType.OK) {
+        if (Buttons.okIn(b)) {
             return vm.save();
         }
         return Optional.empty();

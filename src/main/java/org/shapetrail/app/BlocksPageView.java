@@ -136,10 +136,10 @@ final class BlocksPageView {
 
     private void delete(TrainingBlock b) {
         javafx.scene.control.Alert a = new javafx.scene.control.Alert(javafx.scene.control.Alert.AlertType.CONFIRMATION,
-                tr("blocks.delete.ask", b.name(), b.startsOn(), b.endsOn()), javafx.scene.control.ButtonType.CANCEL, javafx.scene.control.ButtonType.OK);
+                tr("blocks.delete.ask", b.name(), b.startsOn(), b.endsOn()), Buttons.cancel(), Buttons.ok());
         a.setHeaderText(tr("blocks.delete.title"));
         a.initOwner(ctx.window());
-        if (a.showAndWait().orElse(javafx.scene.control.ButtonType.CANCEL) != javafx.scene.control.ButtonType.OK) {
+        if (!Buttons.okIn(a.showAndWait())) {
             return;
         }
         RecordSource file = ctx.loaded().source();

@@ -14,9 +14,20 @@ final class Languages {
     private Languages() {
     }
 
-    /** The system's own locale (its formats), as the JVM started with it. */
+    /** The system's own locale (its formats), as the JVM started with it (before a choice changed the default). */
+    private static final Locale SYSTEM = Locale.getDefault(Locale.Category.FORMAT);
+
     static Locale system() {
-        return Locale.getDefault(Locale.Category.FORMAT);
+        return SYSTEM;
+    }
+
+    /**
+     * Speaks a locale: the bundles' texts, and JavaFX's own words and calendars (a date picker's month
+     * names, a text field's menu) for what is built from now on.
+     */
+    static void speak(Locale locale) {
+        Messages.use(locale);
+        Locale.setDefault(locale);
     }
 
     /** The choice in the settings: "" (as the system) or a language code of ours. */

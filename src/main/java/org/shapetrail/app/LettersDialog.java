@@ -49,8 +49,8 @@ final class LettersDialog {
         g.addRow(5, new Label(tr("letters.contact")), contact);
         g.add(skinfolds, 1, 6);
         d.getDialogPane().setContent(g);
-        d.getDialogPane().getButtonTypes().addAll(ButtonType.CANCEL, ButtonType.OK);
-        d.setResultConverter(b -> b == ButtonType.OK && from.getValue() != null && to.getValue() != null
+        ButtonType ok = Buttons.cancelAndOk(d);
+        d.setResultConverter(b -> b == ok && from.getValue() != null && to.getValue() != null
                 && !to.getValue().isBefore(from.getValue())
                 ? new LetterSettings(academy.getText(), sender.getText(), role.getText(), contact.getText(),
                 from.getValue(), to.getValue(), skinfolds.isSelected()) : null);

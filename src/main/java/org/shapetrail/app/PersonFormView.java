@@ -112,10 +112,10 @@ final class PersonFormView {
         g.add(new Label(tr("form.toPutRight")), 0, r++, 2, 1);
         g.add(problems, 0, r, 2, 1);
         d.getDialogPane().setContent(g);
-        d.getDialogPane().getButtonTypes().addAll(ButtonType.CANCEL, ButtonType.OK);
-        d.getDialogPane().lookupButton(ButtonType.OK).disableProperty().bind(vm.canSave.not());
+        ButtonType ok = Buttons.cancelAndOk(d);
+        d.getDialogPane().lookupButton(ok).disableProperty().bind(vm.canSave.not());
         Optional<ButtonType> b = d.showAndWait();
-        if (b.isPresent() && b.get() == ButtonType.OK) {
+        if (Buttons.okIn(b)) {
             return vm.save();
         }
         return Optional.empty();

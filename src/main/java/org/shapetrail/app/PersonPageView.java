@@ -148,7 +148,7 @@ final class PersonPageView {
         area.setWrapText(false);
         area.setPrefSize(760, 420);
         area.setStyle("-fx-font-family: monospace;"); // not words: a style
-        Alert a = new Alert(Alert.AlertType.INFORMATION, null, ButtonType.CLOSE);
+        Alert a = new Alert(Alert.AlertType.INFORMATION, null, Buttons.close());
         a.setHeaderText(tr("history.header", line.date()));
         a.setTitle(tr("history.title"));
         a.getDialogPane().setContent(area);
@@ -159,10 +159,11 @@ final class PersonPageView {
 
     private void deleteVisit(VisitLine line) {
         stored(line).ifPresent(v -> {
-            Alert a = new Alert(Alert.AlertType.CONFIRMATION, tr("delete.ask", line.date()), ButtonType.CANCEL, ButtonType.OK);
+            Alert a = new Alert(Alert.AlertType.CONFIRMATION, tr("delete.ask", line.date()), Buttons.cancel(),
+                    Buttons.ok());
             a.setHeaderText(tr("delete.title"));
             a.initOwner(ctx.window());
-            if (a.showAndWait().orElse(ButtonType.CANCEL) != ButtonType.OK) {
+            if (!Buttons.okIn(a.showAndWait())) {
                 return;
             }
             RecordSource file = ctx.loaded().source();
@@ -242,8 +243,8 @@ final class PersonPageView {
                 .otherwise(tr("move.from")));
         g.addRow(1, fromLabel, from);
         d.getDialogPane().setContent(g);
-        d.getDialogPane().getButtonTypes().addAll(ButtonType.CANCEL, ButtonType.OK);
-        if (d.showAndWait().orElse(ButtonType.CANCEL) == ButtonType.OK) {
+        Buttons.cancelAndOk(d);
+        if (Buttons.okIn(d.showAndWait())) {
             ctx.organise(() -> to.getValue() == LEAVES ? Organising.leave(l.source(), p.id(), from.getValue())
                     : Organising.moveToSquad(l.source(), p.id(), to.getValue(), from.getValue()));
         }

@@ -77,7 +77,7 @@ final class ServerConnectDialog {
         g.add(problem, 0, 3, 2, 1);
         d.getDialogPane().setContent(g);
         ButtonType connect = new ButtonType(tr("server.connect"), ButtonBar.ButtonData.OK_DONE);
-        d.getDialogPane().getButtonTypes().addAll(connect, ButtonType.CANCEL);
+        d.getDialogPane().getButtonTypes().addAll(connect, Buttons.cancel());
         if (owner != null && owner.getScene() != null) {
             d.getDialogPane().getStylesheets().addAll(owner.getScene().getStylesheets());
         }

@@ -61,7 +61,9 @@ public final class ShapetrailApp extends Application {
             probe("toolkit-started");
         }
         RecordSource start = chooseStart(getParameters() == null ? List.of() : getParameters().getRaw());
-        show(stage, start, new FxTaskRunner(), Languages.atStart(), true);
+        Locale language = Languages.atStart();
+        Languages.speak(language); // JavaFX's own words too, from the first control on
+        show(stage, start, new FxTaskRunner(), language, true);
     }
 
     static void probe(String what) {
@@ -142,7 +144,7 @@ public final class ShapetrailApp extends Application {
         stage.getProperties().put(Workbench.class, workbench);
         workbench.onSpeak(locale -> {
             Workbench earlier = workbenchOf(stage);
-            org.shapetrail.i18n.Messages.use(locale);
+            Languages.speak(locale);
             earlier.retire();
             Workbench now = new Workbench(earlier.viewModel(), locale);
             speakOnChoice(stage, now);

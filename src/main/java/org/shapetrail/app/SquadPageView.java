@@ -135,10 +135,10 @@ final class SquadPageView {
             javafx.scene.control.Alert ask = new javafx.scene.control.Alert(
                     javafx.scene.control.Alert.AlertType.CONFIRMATION, tr("squad.letters.there", there.size(), folder,
                     there.get(0).getFileName()),
-                    javafx.scene.control.ButtonType.CANCEL, javafx.scene.control.ButtonType.OK);
+                    Buttons.cancel(), Buttons.ok());
             ask.setHeaderText(tr("squad.letters.replace"));
             ask.initOwner(ctx.window());
-            if (ask.showAndWait().orElse(javafx.scene.control.ButtonType.CANCEL) != javafx.scene.control.ButtonType.OK) {
+            if (!Buttons.okIn(ask.showAndWait())) {
                 return;
             }
         }

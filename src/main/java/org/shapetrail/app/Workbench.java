@@ -347,7 +347,8 @@ public final class Workbench {
     }
 
     private void about() {
-        javafx.scene.control.Alert a = new javafx.scene.control.Alert(javafx.scene.control.Alert.AlertType.INFORMATION);
+        javafx.scene.control.Alert a = new javafx.scene.control.Alert(javafx.scene.control.Alert.AlertType.INFORMATION,
+                null, Buttons.close());
         a.initOwner(ctx.window());
         a.setTitle(tr("window.about"));
         a.setHeaderText(org.shapetrail.store.AppVersion.named());

@@ -77,6 +77,7 @@ final class WorkbenchContext {
             return;
         }
         TextInputDialog d = new TextInputDialog();
+        Buttons.cancelAndOk(d);
         d.setTitle(title);
         d.setHeaderText(prompt);
         d.initOwner(window());

@@ -37,6 +37,8 @@ import org.testfx.util.WaitForAsyncUtils;
 @ExtendWith(ApplicationExtension.class)
 class OtherLanguagesGuiTest {
     static final Locale SPAIN = Locale.forLanguageTag("es-ES");
+    /** The JVM's default before the window changed it (the window speaks its language to JavaFX too). */
+    static final Locale BEFORE = Locale.getDefault();
     static Path demo;
     Path file;
     Stage stage;
@@ -58,6 +60,7 @@ class OtherLanguagesGuiTest {
     @AfterEach
     void backToEnglish() {
         Messages.use(Locale.ROOT); // the other tests read English
+        Locale.setDefault(BEFORE);
         ShapetrailApp.PREFS.remove(Languages.KEY);
     }
 

@@ -75,6 +75,34 @@ class MessagesBundleTest {
     }
 
     @Test
+    void theBundlesHoldWhatTheTextTablesSay() throws java.io.IOException {
+        // src/main/i18n/texts.py writes the bundles from src/main/i18n/texts/*.tsv: a table edited and not
+        // written out again is caught here (derivation: the generator's own rules, applied in reverse)
+        int lines = 0;
+        try (var files = java.nio.file.Files.list(java.nio.file.Path.of("src/main/i18n/texts"))) {
+            for (java.nio.file.Path f : files.filter(p -> p.toString().endsWith(".tsv")).sorted().toList()) {
+                for (String line : java.nio.file.Files.readAllLines(f, java.nio.charset.StandardCharsets.UTF_8)) {
+                    if (line.isBlank() || line.startsWith("#")) {
+                        continue;
+                    }
+                    String[] cells = line.split("\t", -1);
+                    assertEquals(4, cells.length, f + ": " + line);
+                    String key = cells[0].strip();
+                    for (int i = 0; i < 3; i++) {
+                        String text = cells[i + 1].replaceFirst(" \\(review\\)$", "").replace("\\n", "\n");
+                        String expected = Messages.readByPicocli(key) ? text : text.replace("'", "''");
+                        ResourceBundle b = Messages.bundle(Locale.forLanguageTag(Messages.LANGUAGES.get(i)));
+                        assertEquals(expected, b.getString(key), f.getFileName() + " " + Messages.LANGUAGES.get(i)
+                                + " " + key + ": run python3 src/main/i18n/texts.py");
+                    }
+                    lines++;
+                }
+            }
+        }
+        assertTrue(lines > 700, lines + " texts in the tables");
+    }
+
+    @Test
     void everyApostropheIsDoubledForMessageFormat() {
         // MessageFormat reads a lone ' as the start of quoted text and drops it ("don't" prints as "dont");
         // every pattern goes through MessageFormat, so a written apostrophe must be '' (Java's MessageFormat docs)
