@@ -71,10 +71,44 @@ public final class ShapetrailCli implements Runnable {
             }
             throw ex;
         });
+        cl.setParameterExceptionHandler(ShapetrailCli::refuseArguments);
         int code = cl.execute(args);
         out.flush();
         err.flush();
         return code;
+    }
+
+    /**
+     * Says what is wrong with the arguments in the command's language (picocli's own words are English),
+     * then the command's usage, and exits 2.
+     */
+    static int refuseArguments(CommandLine.ParameterException ex, String[] args) {
+        CommandLine c = ex.getCommandLine();
+        PrintWriter err = c.getErr();
+        err.println(argumentProblem(ex));
+        c.usage(err);
+        return c.getCommandSpec().exitCodeOnInvalidInput();
+    }
+
+    static String argumentProblem(CommandLine.ParameterException ex) {
+        if (ex instanceof CommandLine.UnmatchedArgumentException u) {
+            return org.shapetrail.i18n.Messages.tr("cli.parse.unknown", String.join(" ", u.getUnmatched()));
+        }
+        if (ex instanceof CommandLine.MissingParameterException m) {
+            return org.shapetrail.i18n.Messages.tr("cli.parse.missing", String.join(", ", m.getMissing().stream()
+                    .map(ShapetrailCli::named).toList()));
+        }
+        if (ex.getArgSpec() != null && ex.getCause() instanceof CommandLine.TypeConversionException t) {
+            return org.shapetrail.i18n.Messages.tr("cli.parse.value", named(ex.getArgSpec()), t.getMessage());
+        }
+        if (ex.getArgSpec() != null && ex.getValue() != null) {
+            return org.shapetrail.i18n.Messages.tr("cli.parse.value", named(ex.getArgSpec()), ex.getValue());
+        }
+        return ex.getMessage();
+    }
+
+    private static String named(CommandLine.Model.ArgSpec a) {
+        return a instanceof CommandLine.Model.OptionSpec o ? o.longestName() : a.paramLabel();
     }
 
     /** {@code --version}: the version the pom states, the same in the jar and the installed app. */

@@ -74,6 +74,18 @@ class CommandLineLanguagesTest {
     }
 
     @Test
+    void argumentMistakesAreSaidInTheLanguageAskedAndTheUsageFollows() {
+        Run missing = run("--lang", "es", "changes", "--db", file.toString());
+        assertEquals(2, missing.code());
+        // cli.parse.missing's Spanish, naming the positional parameter by its label, then the usage in Spanish
+        assertTrue(missing.err().startsWith("Falta: ID" + System.lineSeparator() + "Uso: shapetrail changes"),
+                missing.err());
+        Run unknown = run("people", "--nope", "--lang", "pt");
+        assertEquals(2, unknown.code());
+        assertTrue(unknown.err().startsWith("Opção ou argumento desconhecido: --nope"), unknown.err());
+    }
+
+    @Test
     void anUnknownLanguageIsRefusedNamingTheChoices() {
         Run r = run("people", "--lang", "de");
         assertEquals(2, r.code());
