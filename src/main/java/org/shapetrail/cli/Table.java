@@ -61,14 +61,16 @@ final class Table {
         // the aligned text is for reading: its numbers take the decimal separator of the command's language
         // (CSV keeps the decimal point of the documented formats)
         List<List<String>> rows = this.rows.stream().map(r -> r.stream().map(Table::shown).toList()).toList();
+        List<String> shownHeader = header.stream().map(h -> org.shapetrail.i18n.Messages.has("cli.col." + h)
+                ? org.shapetrail.i18n.Messages.tr("cli.col." + h) : h).toList();
         int[] w = new int[header.size()];
         for (int i = 0; i < w.length; i++) {
-            w[i] = header.get(i).length();
+            w[i] = shownHeader.get(i).length();
             for (List<String> r : rows) {
                 w[i] = Math.max(w[i], r.get(i).length());
             }
         }
-        line(out, header, w);
+        line(out, shownHeader, w);
         for (List<String> r : rows) {
             line(out, r, w);
         }

@@ -47,6 +47,11 @@ public final class Messages {
         current = locale == null ? Locale.ROOT : locale;
     }
 
+    /** True when the bundles have a text for {@code key}. */
+    public static boolean has(String key) {
+        return bundle(Locale.ROOT).containsKey(key);
+    }
+
     /** The text of {@code key} in the current language (see {@link #use}), its arguments put in. */
     public static String tr(String key, Object... args) {
         return get(current, key, args);

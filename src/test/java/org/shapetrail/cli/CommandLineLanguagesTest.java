@@ -62,6 +62,9 @@ class CommandLineLanguagesTest {
         String[] lines = text.out().split("\n");
         // the demo's person 1 has rated visits; the count is worded in Spanish, the plural of cli.changes.head
         assertTrue(lines[0].matches(".+: \\d+ visitas con somatotipo"), lines[0]);
+        // the columns are named in Spanish (cli.col.*), the CSV's names are not
+        assertTrue(lines[1].matches("desde\\s+hasta\\s+somatotipo_desde\\s+somatotipo_hasta\\s+múltiplo_ruido\\s+veredicto.*"),
+                lines[1]);
         // the table's ratings and multiples take the decimal comma, its verdicts the Spanish words
         assertTrue(lines[2].matches("\\S+\\s+\\S+\\s+\\d,\\d-\\d,\\d-\\d,\\d\\s+\\d,\\d-\\d,\\d-\\d,\\d\\s+\\d+,\\d\\d\\s+"
                 + "(más allá del ruido|dudoso|dentro del ruido)\\s.*"), lines[2]);
