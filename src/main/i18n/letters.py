@@ -64,6 +64,7 @@ EN = {
  "letter.chart.meso": "muscle and bone build",
  "letter.chart.ecto": "slenderness",
  "letter.language": "English",
+ "letter.omitted": "{0,choice,1#1 earlier measurement of the period is|1<{0} earlier measurements of the period are} not listed here.",
 }
 ES = {
  "letter.title": "Crecimiento y forma corporal: carta de seguimiento",
@@ -126,6 +127,7 @@ ES = {
  "letter.chart.meso": "músculo y hueso",
  "letter.chart.ecto": "esbeltez",
  "letter.language": "Español",
+ "letter.omitted": "{0,choice,1#Una medición anterior del periodo no figura aquí|1<{0} mediciones anteriores del periodo no figuran aquí}.",
 }
 PT = {
  "letter.title": "Crescimento e forma corporal: carta de acompanhamento",
@@ -188,6 +190,7 @@ PT = {
  "letter.chart.meso": "músculo e osso",
  "letter.chart.ecto": "esbeltez",
  "letter.language": "Português",
+ "letter.omitted": "{0,choice,1#Uma medição anterior do período não consta aqui|1<{0} medições anteriores do período não constam aqui}.",
 }
 root = os.path.join(os.path.dirname(__file__), "..", "resources", "org", "shapetrail", "i18n")
 def esc(v):

@@ -17,7 +17,7 @@ import org.shapetrail.measure.Site;
  */
 public final class ColumnMapper {
     private static final Pattern UNIT = Pattern.compile("[\\(\\[]\\s*([a-zA-Z]+)\\s*[\\)\\]]");
-    private static final Pattern TRIAL = Pattern.compile("^(.*?)[\\s_-]*(?:t|trial)?\\s*([123])$");
+    private static final Pattern TRIAL = Pattern.compile("^(.*?)[\\s_-]*(?:t|trial|toma|medicao|medicion)?\\s*([123])$");
     private static final Map<String, Site> SITE_WORDS = siteWords();
     private static final Map<String, Column.Role> ROLE_WORDS = roleWords();
 
@@ -29,6 +29,16 @@ public final class ColumnMapper {
         for (Site s : Site.values()) {
             m.put(s.code().replace('_', ' '), s);
             m.put(norm(s.label()), s);
+            // a Spanish or Portuguese spreadsheet's headers: the sites as the window names them in each language
+            for (String lang : org.shapetrail.i18n.Messages.LANGUAGES) {
+                String named = org.shapetrail.i18n.Messages.get(Locale.forLanguageTag(lang), "site." + s.code());
+                m.putIfAbsent(norm(named), s);
+                m.putIfAbsent(norm(named.replaceFirst("^(Pliegue|Prega|Perímetro|Diámetro|Diâmetro) (del |de la |de |do |da )?",
+                        "")), s);
+            }
+        }
+        for (String w : List.of("talla", "altura", "peso", "masa", "massa")) {
+            m.putIfAbsent(w, w.equals("talla") || w.equals("altura") ? Site.STATURE : Site.BODY_MASS);
         }
         m.put("height", Site.STATURE);
         m.put("stretch stature", Site.STATURE);
@@ -63,6 +73,38 @@ public final class ColumnMapper {
         for (String w : List.of("id", "person id", "person", "athlete id", "player id")) {
             m.put(w, Column.Role.PERSON_ID);
         }
+        for (String w : List.of("id persona", "id pessoa", "id deportista", "id atleta")) {
+            m.put(w, Column.Role.PERSON_ID);
+        }
+        for (String w : List.of("nombre", "nome", "deportista", "atleta", "jugador", "jogador")) {
+            m.put(w, Column.Role.NAME);
+        }
+        for (String w : List.of("fecha de nacimiento", "data de nascimento", "nacimiento", "nascimento")) {
+            m.put(w, Column.Role.BIRTH_DATE);
+        }
+        for (String w : List.of("sexo", "genero")) {
+            m.put(w, Column.Role.SEX);
+        }
+        for (String w : List.of("fecha", "data", "fecha de la visita", "data da visita")) {
+            m.put(w, Column.Role.DATE);
+        }
+        for (String w : List.of("hora", "hora de la visita", "hora da visita")) {
+            m.put(w, Column.Role.TIME);
+        }
+        for (String w : List.of("evaluador", "avaliador", "medidor", "antropometrista", "medido por")) {
+            m.put(w, Column.Role.MEASURER);
+        }
+        for (String w : List.of("contexto", "sesion", "sessao")) {
+            m.put(w, Column.Role.CONTEXT);
+        }
+        for (String w : List.of("medida", "toma", "medicion", "medicao", "valor", "unidad", "unidade")) {
+            m.put(w, switch (w) {
+                case "medida" -> Column.Role.SITE_NAME;
+                case "valor" -> Column.Role.VALUE;
+                case "unidad", "unidade" -> Column.Role.UNIT;
+                default -> Column.Role.TRIAL_NUMBER;
+            });
+        }
         for (String w : List.of("name", "athlete", "player", "display name", "full name")) {
             m.put(w, Column.Role.NAME);
         }
@@ -95,8 +137,10 @@ public final class ColumnMapper {
         return m;
     }
 
+    /** Lower case, accents off ("Tríceps" as "triceps"), anything but letters and digits a single space. */
     static String norm(String s) {
-        return s.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", " ").strip();
+        String plain = java.text.Normalizer.normalize(s, java.text.Normalizer.Form.NFD).replaceAll("\\p{M}", "");
+        return plain.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", " ").strip();
     }
 
     /** The suggested column for one header. */

@@ -85,10 +85,10 @@ public final class LetterPdf {
             StringBuilder chars = new StringBuilder();
             missing.stream().limit(8).forEach(cp -> chars.append(new String(Character.toChars(cp))).append(' ')
                     .append(String.format(java.util.Locale.ROOT, "(U+%04X) ", cp)));
-            throw new UnwritableLetterException("The letter for " + letter.recipientName() + " was not written: "
-                    + (rtl ? "right-to-left text is not laid out in letters, and " : "") + "the letter font (Liberation"
-                    + " Sans: Latin, Greek and Cyrillic) has no " + chars.toString().strip() + ". Write the name in"
-                    + " one of those scripts (Edit person…) to send this letter; the other letters are written.");
+            // told to the staff (the window's or the command's language), not to the family
+            throw new UnwritableLetterException(org.shapetrail.i18n.Messages.tr("letters.unwritable",
+                    letter.recipientName(), rtl ? org.shapetrail.i18n.Messages.tr("letters.rtl") : "",
+                    chars.toString().strip()));
         }
     }
 
@@ -165,11 +165,11 @@ public final class LetterPdf {
             y -= h + 10;
         }
         if (!letter.table().isEmpty()) {
-            table(letter.table());
+            table(letter.table(), letter.language());
         }
     }
 
-    private void table(List<List<String>> rows) throws IOException {
+    private void table(List<List<String>> rows, java.util.Locale language) throws IOException {
         int cols = rows.get(0).size();
         float colW = width() / cols;
         float rowH = 13;
@@ -187,7 +187,8 @@ public final class LetterPdf {
             drawRow(r, colW, regular, 9);
         }
         if (omitted > 0) {
-            paragraph(omitted + " earlier measurement(s) of the period are not listed here.", regular, 8.5f, MUTED, 2);
+            paragraph(org.shapetrail.i18n.Messages.get(language, "letter.omitted", omitted), regular, 8.5f, MUTED,
+                    2);
         }
         y -= 6;
     }

@@ -285,4 +285,23 @@ class ExchangeTest {
         assertEquals(Column.Role.BIRTH_DATE, ColumnMapper.suggest("DOB").role());
         assertEquals(Column.Role.IGNORED, ColumnMapper.suggest("Shoe size").role());
     }
+
+    @Test
+    void spanishAndPortugueseHeadersAreReadToo() {
+        // the sites as the window names them in each language (site.* in the bundles), accents or not,
+        // with a trial number or a unit; the people's and visits' columns by their usual words
+        assertEquals(new Column("Tríceps 2", Column.Role.SITE_VALUE, Site.TRICEPS, 2, null),
+                ColumnMapper.suggest("Tríceps 2"));
+        assertEquals(new Column("Pliegue supraespinal (mm)", Column.Role.SITE_VALUE, Site.SUPRASPINALE, 0, InputUnit.MM),
+                ColumnMapper.suggest("Pliegue supraespinal (mm)"));
+        assertEquals(new Column("Perímetro da cintura", Column.Role.SITE_VALUE, Site.WAIST, 0, null),
+                ColumnMapper.suggest("Perímetro da cintura"));
+        assertEquals(new Column("Masa corporal toma 1", Column.Role.SITE_VALUE, Site.BODY_MASS, 1, null),
+                ColumnMapper.suggest("Masa corporal toma 1"));
+        assertEquals(new Column("Altura sentado_cm", Column.Role.SITE_VALUE, Site.SITTING_HEIGHT, 0, InputUnit.CM),
+                ColumnMapper.suggest("Altura sentado_cm"));
+        assertEquals(Column.Role.BIRTH_DATE, ColumnMapper.suggest("Fecha de nacimiento").role());
+        assertEquals(Column.Role.MEASURER, ColumnMapper.suggest("Avaliador").role());
+        assertEquals(Column.Role.NAME, ColumnMapper.suggest("Nombre").role());
+    }
 }
