@@ -85,6 +85,10 @@ final class Table {
         if (word != null) {
             return org.shapetrail.i18n.Messages.tr(word);
         }
+        var site = org.shapetrail.measure.Site.byCode(cell);
+        if (site.isPresent()) {
+            return site.get().shown();
+        }
         if (sep == '.' || !NUMBERS.matcher(cell).matches()) {
             return cell;
         }
@@ -96,7 +100,10 @@ final class Table {
             org.shapetrail.noise.Verdict.BEYOND_NOISE.words(), "verdict.BEYOND_NOISE",
             org.shapetrail.noise.Verdict.BORDERLINE.words(), "verdict.BORDERLINE",
             org.shapetrail.noise.Verdict.WITHIN_NOISE.words(), "verdict.WITHIN_NOISE",
-            "yes", "cli.yes", "no", "cli.no");
+            "yes", "cli.yes", "no", "cli.no",
+            org.shapetrail.noise.TemTargets.Standing.WITHIN_TARGET.words(), "tem.WITHIN_TARGET",
+            org.shapetrail.noise.TemTargets.Standing.ENTRY_LEVEL_ONLY.words(), "tem.ENTRY_LEVEL_ONLY",
+            org.shapetrail.noise.TemTargets.Standing.OUTSIDE.words(), "tem.OUTSIDE");
 
     /** Cells made of numbers only: "1.43", "-0.5", "2.5-4.0-3.1", "6.1 ± 1.4", "12.5 %". */
     private static final java.util.regex.Pattern NUMBERS = java.util.regex.Pattern.compile(
