@@ -65,11 +65,12 @@ public final class FileClaim implements AutoCloseable {
                 String who = new String(Files.readAllBytes(lf), StandardCharsets.UTF_8).strip();
                 ch.close();
                 READ_ONLY.add(abs);
-                HOLDERS.put(abs, who.isEmpty() ? "another Shapetrail window" : who);
+                HOLDERS.put(abs, shown(who));
                 return Optional.empty();
             }
-            String who = "Shapetrail (" + System.getProperty("user.name", "?") + " on " + host() + ", since "
-                    + LocalDateTime.now().format(DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm")) + ")";
+            // one line a person can read in the file itself; each window says it again in its own language (shown)
+            String who = "Shapetrail (" + System.getProperty("user.name", "?") + " on " + host() + ", since " // not words
+                    + LocalDateTime.now().format(DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm")) + ")"; // not words
             ch.truncate(0);
             ch.write(ByteBuffer.wrap((who + "\n").getBytes(StandardCharsets.UTF_8)), 0);
             ch.force(false);
@@ -81,6 +82,19 @@ public final class FileClaim implements AutoCloseable {
             closeQuietly(ch);
             return Optional.empty();
         }
+    }
+
+    private static final java.util.regex.Pattern LINE = java.util.regex.Pattern.compile(
+            "Shapetrail \\((.*) on (.*), since (.*)\\)");
+
+    /** The holder in the reader's language, from the lock file's line (who, on which computer, since when). */
+    static String shown(String line) {
+        java.util.regex.Matcher m = LINE.matcher(line);
+        if (m.matches()) {
+            return org.shapetrail.i18n.Messages.tr("claim.holder", m.group(1), m.group(2).isBlank()
+                    ? org.shapetrail.i18n.Messages.tr("claim.thisComputer") : m.group(2), m.group(3));
+        }
+        return line.isEmpty() ? org.shapetrail.i18n.Messages.tr("claim.another") : line;
     }
 
     /** Who holds the file when this process opened it read-only because of them, else empty. */
@@ -124,7 +138,7 @@ public final class FileClaim implements AutoCloseable {
         try {
             return Files.readString(Path.of("/etc/hostname"), StandardCharsets.UTF_8).strip();
         } catch (IOException | RuntimeException e) {
-            return "this computer";
+            return "";
         }
     }
 
