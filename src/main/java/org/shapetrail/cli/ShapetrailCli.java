@@ -98,13 +98,28 @@ public final class ShapetrailCli implements Runnable {
             return org.shapetrail.i18n.Messages.tr("cli.parse.missing", String.join(", ", m.getMissing().stream()
                     .map(ShapetrailCli::named).toList()));
         }
-        if (ex.getArgSpec() != null && ex.getCause() instanceof CommandLine.TypeConversionException t) {
+        if (ex.getArgSpec() != null && ex.getCause() instanceof CommandLine.TypeConversionException t
+                && ex.getArgSpec().converters().length > 0) {
+            // our own converter's words, already in the command's language
             return org.shapetrail.i18n.Messages.tr("cli.parse.value", named(ex.getArgSpec()), t.getMessage());
+        }
+        if (ex.getArgSpec() != null && ex.getCause() instanceof CommandLine.TypeConversionException) {
+            // picocli's own conversions (a number, a date) say it in English: say it again in ours
+            return org.shapetrail.i18n.Messages.tr("cli.parse.type", named(ex.getArgSpec()),
+                    String.valueOf(ex.getValue()), typeWord(ex.getArgSpec().type()));
         }
         if (ex.getArgSpec() != null && ex.getValue() != null) {
             return org.shapetrail.i18n.Messages.tr("cli.parse.value", named(ex.getArgSpec()), ex.getValue());
         }
         return ex.getMessage();
+    }
+
+    private static String typeWord(Class<?> type) {
+        if (type == java.time.LocalDate.class) {
+            return org.shapetrail.i18n.Messages.tr("cli.type.date");
+        }
+        return org.shapetrail.i18n.Messages.tr(type == int.class || type == Integer.class || type == long.class
+                || type == Long.class ? "cli.type.whole" : "cli.type.value");
     }
 
     private static String named(CommandLine.Model.ArgSpec a) {

@@ -96,15 +96,16 @@ final class Table {
     }
 
     /** The code words the CSV formats hold, and their keys for the aligned text. */
-    private static final java.util.Map<String, String> WORDS = java.util.Map.of(
-            org.shapetrail.noise.Verdict.BEYOND_NOISE.words(), "verdict.BEYOND_NOISE",
-            org.shapetrail.noise.Verdict.BORDERLINE.words(), "verdict.BORDERLINE",
-            org.shapetrail.noise.Verdict.WITHIN_NOISE.words(), "verdict.WITHIN_NOISE",
-            "yes", "cli.yes", "no", "cli.no",
-            org.shapetrail.noise.TemTargets.Standing.WITHIN_TARGET.words(), "tem.WITHIN_TARGET",
-            org.shapetrail.noise.TemTargets.Standing.ENTRY_LEVEL_ONLY.words(), "tem.ENTRY_LEVEL_ONLY",
-            org.shapetrail.noise.TemTargets.Standing.OUTSIDE.words(), "tem.OUTSIDE");
-
+    private static final java.util.Map<String, String> WORDS = java.util.Map.ofEntries(
+            java.util.Map.entry("endomorphy", "space.endomorphy"), java.util.Map.entry("mesomorphy", "space.mesomorphy"),
+            java.util.Map.entry("ectomorphy", "space.ectomorphy"), java.util.Map.entry("yes", "cli.yes"),
+            java.util.Map.entry("no", "cli.no"),
+            java.util.Map.entry(org.shapetrail.noise.Verdict.BEYOND_NOISE.words(), "verdict.BEYOND_NOISE"),
+            java.util.Map.entry(org.shapetrail.noise.Verdict.BORDERLINE.words(), "verdict.BORDERLINE"),
+            java.util.Map.entry(org.shapetrail.noise.Verdict.WITHIN_NOISE.words(), "verdict.WITHIN_NOISE"),
+            java.util.Map.entry(org.shapetrail.noise.TemTargets.Standing.WITHIN_TARGET.words(), "tem.WITHIN_TARGET"),
+            java.util.Map.entry(org.shapetrail.noise.TemTargets.Standing.ENTRY_LEVEL_ONLY.words(), "tem.ENTRY_LEVEL_ONLY"),
+            java.util.Map.entry(org.shapetrail.noise.TemTargets.Standing.OUTSIDE.words(), "tem.OUTSIDE"));
     /** Cells made of numbers only: "1.43", "-0.5", "2.5-4.0-3.1", "6.1 ± 1.4", "12.5 %". */
     private static final java.util.regex.Pattern NUMBERS = java.util.regex.Pattern.compile(
             "[-+]?\\d+(\\.\\d+)?(\\s*[-–±/]\\s*[-+]?\\d+(\\.\\d+)?)*(\\s*%)?");
