@@ -187,4 +187,24 @@ class OtherLanguagesGuiTest {
         assertTrue(robot.lookup("#measurer-list").queryAs(Label.class).getText().startsWith("Evaluadores en este archivo: "));
         WorkbenchGuiTest.snapshot(stage.getScene().getRoot(), "measurers-es.png");
     }
+
+    @Test
+    void thePersonFormAndItsButtonsSpeakSpanishAndCancelWritesNothing(FxRobot robot) throws Exception {
+        int before = robot.lookup("#people").queryAs(TableView.class).getItems().size();
+        robot.clickOn("#new-person");
+        WaitForAsyncUtils.waitForFxEvents();
+        javafx.scene.Node name = robot.lookup("#person-name").query();
+        javafx.scene.control.DialogPane pane = (javafx.scene.control.DialogPane) name.getScene().getRoot();
+        // form.title.new and the dialog's own buttons (Buttons: button.ok, button.cancel) in Spanish
+        assertEquals("Persona nueva", ((Stage) name.getScene().getWindow()).getTitle());
+        java.util.List<String> buttons = pane.getButtonTypes().stream().map(b -> ((javafx.scene.control.Button)
+                pane.lookupButton(b)).getText()).toList();
+        assertEquals(java.util.List.of("Cancelar", "Aceptar"), buttons);
+        assertTrue(pane.lookupAll(".label").stream().anyMatch(n -> "Fecha de nacimiento".equals(((Label) n).getText())));
+        WorkbenchGuiTest.snapshot(pane, "person-form-es.png");
+        robot.clickOn(robot.lookup(".button").match(n -> n instanceof javafx.scene.control.Button b
+                && b.getText().equals("Cancelar")).queryButton());
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(before, robot.lookup("#people").queryAs(TableView.class).getItems().size());
+    }
 }
