@@ -85,6 +85,13 @@ final class Table {
         if (word != null) {
             return org.shapetrail.i18n.Messages.tr(word);
         }
+        java.util.regex.Matcher day = DAY.matcher(cell);
+        if (day.matches()) {
+            // a day as the command's language writes it ("24 mar 2026"); the CSV keeps ISO dates
+            return java.time.LocalDate.parse(day.group(1)).format(java.time.format.DateTimeFormatter.ofLocalizedDate(
+                    java.time.format.FormatStyle.MEDIUM).withLocale(org.shapetrail.i18n.Messages.current()))
+                    + (day.group(2) == null ? "" : day.group(2));
+        }
         var site = org.shapetrail.measure.Site.byCode(cell);
         if (site.isPresent()) {
             return site.get().shown();
@@ -94,6 +101,10 @@ final class Table {
         }
         return cell.replaceAll("(?<=\\d)\\.(?=\\d)", String.valueOf(sep));
     }
+
+    /** An ISO day, alone or before a note in brackets ("2026-03-24", "2026-03-24 (first)"). */
+    private static final java.util.regex.Pattern DAY = java.util.regex.Pattern.compile(
+            "(\\d{4}-\\d{2}-\\d{2})( \\(.*\\))?");
 
     /** The code words the CSV formats hold, and their keys for the aligned text. */
     private static final java.util.Map<String, String> WORDS = java.util.Map.ofEntries(

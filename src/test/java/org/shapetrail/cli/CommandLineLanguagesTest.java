@@ -65,8 +65,9 @@ class CommandLineLanguagesTest {
         // the columns are named in Spanish (cli.col.*), the CSV's names are not
         assertTrue(lines[1].matches("desde\\s+hasta\\s+somatotipo_desde\\s+somatotipo_hasta\\s+múltiplo_ruido\\s+veredicto.*"),
                 lines[1]);
-        // the table's ratings and multiples take the decimal comma, its verdicts the Spanish words
-        assertTrue(lines[2].matches("\\S+\\s+\\S+\\s+\\d,\\d-\\d,\\d-\\d,\\d\\s+\\d,\\d-\\d,\\d-\\d,\\d\\s+\\d+,\\d\\d\\s+"
+        // the table's days are written the Spanish way (the JDK's medium form, "11 sept 2023"), its ratings and
+        // multiples take the decimal comma, its verdicts the Spanish words
+        assertTrue(lines[2].matches("\\d{1,2} \\p{L}+\\.? \\d{4}\\s+\\d{1,2} \\p{L}+\\.? \\d{4}\\s+\\d,\\d-\\d,\\d-\\d,\\d\\s+\\d,\\d-\\d,\\d-\\d,\\d\\s+\\d+,\\d\\d\\s+"
                 + "(más allá del ruido|dudoso|dentro del ruido)\\s.*"), lines[2]);
 
         Run csv = run("changes", "1", "--db", file.toString(), "--format", "csv", "--lang", "es");
