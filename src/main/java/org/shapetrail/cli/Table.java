@@ -104,7 +104,7 @@ final class Table {
 
     /** An ISO day, alone or before a note in brackets ("2026-03-24", "2026-03-24 (first)"). */
     private static final java.util.regex.Pattern DAY = java.util.regex.Pattern.compile(
-            "(\\d{4}-\\d{2}-\\d{2})( \\(.*\\))?");
+            "(\\d{4}-\\d{2}-\\d{2})( \\(.*\\))?"); // not words: a pattern
 
     /** The code words the CSV formats hold, and their keys for the aligned text. */
     private static final java.util.Map<String, String> WORDS = java.util.Map.ofEntries(
