@@ -93,7 +93,7 @@ final class PersonFormView {
             public String toString(String code) {
                 return code == null || code.isEmpty() ? tr("form.letters.default", Languages.nameOf(
                         org.shapetrail.i18n.Messages.languageOf(org.shapetrail.i18n.Messages.current())))
-                        : org.shapetrail.i18n.Messages.get(java.util.Locale.forLanguageTag(code), "letter.language");
+                        : Languages.nameOf(code);
             }
 
             @Override

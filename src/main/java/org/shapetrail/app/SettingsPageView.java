@@ -2,7 +2,6 @@ package org.shapetrail.app;
 
 import static org.shapetrail.i18n.Messages.tr;
 
-import java.util.Locale;
 import java.util.Map;
 import javafx.geometry.Insets;
 import javafx.scene.Parent;
@@ -26,8 +25,6 @@ import org.shapetrail.somatotype.EndomorphyVariant;
  * the rapid-growth threshold, body mass day-to-day variation, the endomorphy form (shown as they are now).
  */
 final class SettingsPageView {
-    /** The language choice "as the system": no language of its own. */
-    static final String SYSTEM = "";
     private final VBox root;
 
     SettingsPageView(WorkbenchContext ctx) {
@@ -72,7 +69,7 @@ final class SettingsPageView {
         });
         ComboBox<String> language = new ComboBox<>();
         language.setId("window-language");
-        language.getItems().add(SYSTEM);
+        language.getItems().add(Languages.SYSTEM);
         language.getItems().addAll(Messages.LANGUAGES);
         language.setConverter(new StringConverter<>() {
             @Override
@@ -80,7 +77,7 @@ final class SettingsPageView {
                 if (code == null) {
                     return "";
                 }
-                return code.equals(SYSTEM) ? tr("settings.language.system", Languages.nameOf(Messages.languageOf(
+                return code.equals(Languages.SYSTEM) ? tr("settings.language.system", Languages.nameOf(Messages.languageOf(
                         Languages.system()))) : Languages.nameOf(code);
             }
 
@@ -107,15 +104,5 @@ final class SettingsPageView {
 
     Parent root() {
         return root;
-    }
-
-    /** The locale a language choice gives (the system's for {@link #SYSTEM}). */
-    static Locale localeOf(String code) {
-        if (code == null || code.equals(SYSTEM)) {
-            return Languages.system();
-        }
-        // a language chosen away from its countries: Portugal's Portuguese (the one the texts are written in)
-        Locale l = Messages.localeFor(code, Languages.system());
-        return l.getCountry().isEmpty() && code.equals("pt") ? Locale.forLanguageTag("pt-PT") : l;
     }
 }

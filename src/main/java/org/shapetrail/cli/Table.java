@@ -60,7 +60,8 @@ final class Table {
         }
         // the aligned text is for reading: its numbers take the decimal separator of the command's language
         // (CSV keeps the decimal point of the documented formats)
-        List<List<String>> rows = this.rows.stream().map(r -> r.stream().map(Table::shown).toList()).toList();
+        char sep = org.shapetrail.measure.Numbers.separator();
+        List<List<String>> rows = this.rows.stream().map(r -> r.stream().map(c -> shown(c, sep)).toList()).toList();
         List<String> shownHeader = header.stream().map(h -> org.shapetrail.i18n.Messages.has("cli.col." + h)
                 ? org.shapetrail.i18n.Messages.tr("cli.col." + h) : h).toList();
         int[] w = new int[header.size()];
@@ -78,9 +79,7 @@ final class Table {
     }
 
     /** A number (or a rating like 2.5-4.0-3.1, or 6.1 ± 1.4) with the language's decimal separator. */
-    static String shown(String cell) {
-        char sep = java.text.DecimalFormatSymbols.getInstance(org.shapetrail.i18n.Messages.supported(
-                org.shapetrail.i18n.Messages.current())).getDecimalSeparator();
+    static String shown(String cell, char sep) {
         String word = WORDS.get(cell);
         if (word != null) {
             return org.shapetrail.i18n.Messages.tr(word);

@@ -25,8 +25,9 @@ public final class Numbers {
         return String.format(Locale.ROOT, "%.1f", value).replace('.', separator());
     }
 
-    private static char separator() {
-        return java.text.DecimalFormatSymbols.getInstance(org.shapetrail.i18n.Messages.supported(
-                org.shapetrail.i18n.Messages.current())).getDecimalSeparator();
+    /** The decimal separator of the language the messages are in. */
+    public static char separator() {
+        return DecimalStyle.of(org.shapetrail.i18n.Messages.supported(org.shapetrail.i18n.Messages.current()))
+                .separator();
     }
 }
