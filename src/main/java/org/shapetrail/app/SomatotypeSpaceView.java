@@ -86,9 +86,9 @@ public final class SomatotypeSpaceView extends StackPane {
         world.getChildren().add(axis(new Point3D(8, 0, 0), Color.web("#a3472f")));
         world.getChildren().add(axis(new Point3D(0, 8, 0), Color.web("#1f6f78")));
         world.getChildren().add(axis(new Point3D(0, 0, 8), Color.web("#3f5fa8")));
-        world.getChildren().addAll(label(org.shapetrail.i18n.Messages.tr("space.endomorphy"), Rating.of(8.6, 0, 0)),
-                label(org.shapetrail.i18n.Messages.tr("space.mesomorphy"), Rating.of(0, 8.6, 0)),
-                label(org.shapetrail.i18n.Messages.tr("space.ectomorphy"), Rating.of(0, 0, 8.6)));
+        world.getChildren().addAll(label(org.shapetrail.somatotype.Component.ENDOMORPHY.shown(), Rating.of(8.6, 0, 0)),
+                label(org.shapetrail.somatotype.Component.MESOMORPHY.shown(), Rating.of(0, 8.6, 0)),
+                label(org.shapetrail.somatotype.Component.ECTOMORPHY.shown(), Rating.of(0, 0, 8.6)));
         world.getChildren().addAll(plane());
         Point3D prev = null;
         for (int i = 0; i < ratings.size(); i++) {

@@ -266,7 +266,8 @@ public final class VisitEntryViewModel {
             return null;
         }
         double[] v = new double[3];
-        String[] names = {tr("entry.rater.endomorphy"), tr("entry.rater.mesomorphy"), tr("entry.rater.ectomorphy")};
+        String[] names = java.util.Arrays.stream(org.shapetrail.somatotype.Component.values())
+                .map(org.shapetrail.somatotype.Component::shown).toArray(String[]::new);
         for (int i = 0; i < 3; i++) {
             try {
                 v[i] = Double.parseDouble(t.get(i).replace(DecimalStyle.of(locale).separator(), '.'));

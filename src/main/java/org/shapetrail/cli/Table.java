@@ -107,8 +107,8 @@ final class Table {
 
     /** The code words the CSV formats hold, and their keys for the aligned text. */
     private static final java.util.Map<String, String> WORDS = java.util.Map.ofEntries(
-            java.util.Map.entry("endomorphy", "space.endomorphy"), java.util.Map.entry("mesomorphy", "space.mesomorphy"),
-            java.util.Map.entry("ectomorphy", "space.ectomorphy"), java.util.Map.entry("yes", "cli.yes"),
+            java.util.Map.entry("endomorphy", "component.endomorphy"), java.util.Map.entry("mesomorphy", "component.mesomorphy"),
+            java.util.Map.entry("ectomorphy", "component.ectomorphy"), java.util.Map.entry("yes", "cli.yes"),
             java.util.Map.entry("no", "cli.no"),
             java.util.Map.entry(org.shapetrail.noise.Verdict.BEYOND_NOISE.words(), "verdict.BEYOND_NOISE"),
             java.util.Map.entry(org.shapetrail.noise.Verdict.BORDERLINE.words(), "verdict.BORDERLINE"),

@@ -23,7 +23,7 @@ public enum Component {
 
     /** The component's name in the reader's language ("endomorfia"). */
     public String shown() {
-        return org.shapetrail.i18n.Messages.tr("space." + label);
+        return org.shapetrail.i18n.Messages.tr("component." + label);
     }
 
     /** "endomorph", as used for the dominant component of a category name. */
