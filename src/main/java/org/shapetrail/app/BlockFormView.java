@@ -70,7 +70,7 @@ final class BlockFormView {
         Label hint = new Label(tr("blockform.hint", org.shapetrail.history.BlockReview.DEFAULT_WINDOW_DAYS));
         hint.setWrapText(true);
         hint.getStyleClass().add("hint");
-        VBox box = new VBox(8, head, hint, scroll, new Label(tr("blockform.toPutRight")), problems);
+        VBox box = new VBox(8, head, hint, scroll, new Label(tr("form.toPutRight")), problems);
         box.setPadding(new Insets(10));
         box.setPrefWidth(640);
         d.getDialogPane().setContent(box);

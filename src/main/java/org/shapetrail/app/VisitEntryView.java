@@ -189,7 +189,7 @@ public final class VisitEntryView {
         HBox buttons = new HBox(8, save, cancel, reload, hint);
 
         context.setOnAction(e -> order.get(0).requestFocus());
-        VBox body = new VBox(10, who, head, confirm, grid, raterBox, live, verdict, new Label(tr("entry.toPutRight")),
+        VBox body = new VBox(10, who, head, confirm, grid, raterBox, live, verdict, new Label(tr("form.toPutRight")),
                 problems, buttons);
         body.setPadding(new Insets(12));
         ScrollPane scroll = new ScrollPane(body);
